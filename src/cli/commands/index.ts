@@ -1,0 +1,8 @@
+/** Registry of subcommands: name → function that adds it to the program. One file per command. */
+import type { Command } from 'commander';
+
+export type RegisterCommand = (program: Command) => void;
+
+export const COMMANDS = new Map<string, RegisterCommand>([
+  // each command file adds one entry here, e.g. ['inspect', registerInspect]
+]);

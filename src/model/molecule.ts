@@ -1,0 +1,61 @@
+/** Core data types shared by every layer. Atom indices are 0-based inside the library, 1-based for users. */
+
+/** Input formats conformark reads. */
+export type FormatName = 'xyz' | 'sdf' | 'pdb';
+
+/** One atom as read from a file. */
+export interface Atom {
+  /** Element symbol, normalised capitalisation (`C`, `Cl`). */
+  readonly element: string;
+  /** Atom name from the file (PDB atom name, or an SD/XYZ label), or `null` when the file has none. */
+  readonly name: string | null;
+  /** PDB residue name, when known. */
+  readonly residue?: string;
+  /** Formal charge from the file (molfile), 0 when absent. */
+  readonly charge?: number;
+}
+
+/** A bond between two atoms (0-based indices, `a < b`). */
+export interface Bond {
+  readonly a: number;
+  readonly b: number;
+  /** Bond order from the file (1, 2, 3, 4 = aromatic); 1 for perceived bonds. */
+  readonly order: number;
+  /** True when the bond was perceived from coordinates rather than read from the file. */
+  readonly perceived: boolean;
+}
+
+/** Where a record came from, for messages and reports. */
+export interface RecordSource {
+  /** Path as the user gave it (`-` for standard input). */
+  readonly file: string;
+  readonly format: FormatName;
+  /** Record (frame) number in the file, counted from 1. */
+  readonly index: number;
+  /** First line of the record in the file, counted from 1. */
+  readonly line: number;
+}
+
+/**
+ * One record (molecule, conformer or frame).
+ * `coords` holds x, y, z of atom i at 3i, 3i+1, 3i+2, in Å.
+ * `bonds` is `null` when the file gave none (bonds are then perceived).
+ */
+export interface Molecule {
+  readonly title: string;
+  readonly atoms: readonly Atom[];
+  readonly coords: Float64Array;
+  readonly bonds: readonly Bond[] | null;
+  /** SD data fields or XYZ `key=value` comment properties, in file order. */
+  readonly properties: Readonly<Record<string, string>>;
+  readonly source: RecordSource;
+}
+
+/** A 3-vector in Å (or a unit direction). */
+export type Vec3 = readonly [number, number, number];
+
+/** Position of atom `i` (0-based). */
+export function atomPosition(mol: Pick<Molecule, 'coords'>, i: number): Vec3 {
+  const c = mol.coords;
+  return [c[3 * i]!, c[3 * i + 1]!, c[3 * i + 2]!];
+}
