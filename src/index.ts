@@ -12,3 +12,14 @@ export { klynePrelog, torsionRelation } from './geometry/klynePrelog.js';
 export type { KlynePrelog, TorsionRelation } from './geometry/klynePrelog.js';
 export { wrap180, wrap360 } from './geometry/vec3.js';
 export { writeAtomic, protectInput } from './io/writeAtomic.js';
+export { buildGraph } from './perceive/graph.js';
+export type { Graph } from './perceive/graph.js';
+export {
+  cremerPople,
+  meanPlane,
+  displacementsFromModes,
+  sixRingModes,
+  ringFromDisplacements,
+  PHASE_THRESHOLD,
+} from './geometry/cremerPople.js';
+export type { Puckering, PuckeringMode } from './geometry/cremerPople.js';
