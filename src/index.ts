@@ -23,3 +23,51 @@ export {
   PHASE_THRESHOLD,
 } from './geometry/cremerPople.js';
 export type { Puckering, PuckeringMode } from './geometry/cremerPople.js';
+
+// couplings + ensembles (area E)
+export { KARPLUS_FORMS, karplusJ } from './analysis/karplus.js';
+export type { KarplusForm, KarplusMethod } from './analysis/karplus.js';
+export {
+  HAASNOOT_SETS,
+  FLUORINE_CHI_DEFAULT,
+  FLUORINE_CHI_ALTERNATIVE,
+  haasnootJ,
+  haasnootSetFor,
+  hugginsElectronegativity,
+  isHaasnootSet,
+  substituentOrientation,
+} from './analysis/haasnoot.js';
+export type { HaasnootParameters, HaasnootSet, HaasnootTerm } from './analysis/haasnoot.js';
+export {
+  COUPLING_METHODS,
+  couplingsAcrossBond,
+  isSkippedCoupling,
+  ringCouplings,
+  toCouplingJson,
+  vicinalCoupling,
+} from './analysis/coupling.js';
+export type {
+  Coupling,
+  CouplingJson,
+  CouplingMethod,
+  CouplingOptions,
+  CouplingResult,
+  SkippedCoupling,
+} from './analysis/coupling.js';
+export {
+  ENERGY_UNITS,
+  GAS_CONSTANT_KCAL,
+  GAS_CONSTANT_KJ,
+  boltzmannPopulations,
+  convertEnergy,
+  ensembleAverage,
+} from './analysis/boltzmann.js';
+export type { BoltzmannOptions, BoltzmannResult, EnergyUnit } from './analysis/boltzmann.js';
+export { superpose, applyMat3 } from './analysis/superpose.js';
+export type { Mat3, Superposition } from './analysis/superpose.js';
+export { heavyAtomRmsd } from './analysis/rmsd.js';
+export type { ConformerRmsd, RmsdOptions } from './analysis/rmsd.js';
+export { findDuplicates } from './analysis/duplicates.js';
+export type { DuplicateOptions } from './analysis/duplicates.js';
+export { torsionFingerprint, compareTorsionFingerprints } from './analysis/torsionFingerprint.js';
+export type { FingerprintDifference, TorsionAtoms } from './analysis/torsionFingerprint.js';
