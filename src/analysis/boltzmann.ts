@@ -87,7 +87,7 @@ export function boltzmannPopulations(energies: readonly number[], options: Boltz
   });
   const relativeEnergies = energies.map((e) => e - energies[lowest]!);
   const logWeights = relativeEnergies.map((d, i) => Math.log(g[i]!) - d / rt);
-  const top = Math.max(...logWeights);
+  const top = logWeights.reduce((m, w) => (w > m ? w : m), -Infinity);
   const logSum = top + Math.log(logWeights.reduce((acc, w) => acc + Math.exp(w - top), 0));
   const populations = logWeights.map((w) => Math.exp(w - logSum));
   return { temperatureK, unit, relativeEnergies, populations, lowest };
