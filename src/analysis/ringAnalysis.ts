@@ -31,7 +31,10 @@ export interface AnalyzeRingOptions extends RingShapeOptions, SubstituentOptions
   readonly pseudorotation?: 'auto' | PseudorotationMethod;
 }
 
-/** Cremer–Pople numbers as reported (phases withheld where the amplitude is below 0.05 Å). */
+/**
+ * Cremer–Pople numbers as reported: phases withheld where their amplitude is below 0.05 Å, and θ and φ null for a
+ * planar ring (they are noise there).
+ */
 export interface RingPuckering {
   readonly Q: number;
   readonly thetaDeg: number | null;
@@ -140,7 +143,7 @@ export function analyzeRing(
     referenceRule: ref.rule,
     puckering: {
       Q: pk.Q,
-      thetaDeg: pk.thetaDeg,
+      thetaDeg: planar ? null : pk.thetaDeg,
       phiDeg: planar ? null : pk.phiDeg,
       amplitudes: pk.amplitudes.map(({ m, q, phaseDeg }) => ({
         m,

@@ -98,7 +98,8 @@ describe('ringSubstituents on the METHODS.md §5 models (derived)', () => {
     };
     const bonds = [...mol.bonds!, ...points.map((_, j) => ({ a: j, b: 6 + j, order: 1, perceived: false }))];
     const g = { ...graph, neighbors: graph.neighbors.map((l, j) => [...l, 6 + j]).concat(points.map((_, j) => [j])) };
-    const r = analyzeRing({ ...withH, bonds }, g, ring);
+    const benzene = { ...withH, bonds };
+    const r = analyzeRing(benzene, g, ring);
     expect(r.substituents).toHaveLength(6);
     expect(r.substituents.every((s) => s.position === null && s.face === null)).toBe(true);
   });
