@@ -16,6 +16,7 @@
  * - screw-boat, five-ring envelope and twist, seven- and larger rings, and rings far from every form
  *   (`puckered`): `pseudo-axial` / `pseudo-equatorial`.
  * - planar ring: `position` null (no axial/equatorial sense); `face` still given.
+ * A ring 20–30° from its nearest form (`distorted`) takes that form's words.
  * Choosing between the two words of a pair: at an atom with two classified exocyclic bonds the smaller α takes
  * the axial-like word, unless the two α differ by less than `isoclinalDiffDeg` (then both `isoclinal`); at an
  * atom with one (or three) bonds, α ≤ `axialMaxDeg` → axial-like, α ≥ `equatorialMinDeg` → equatorial-like,

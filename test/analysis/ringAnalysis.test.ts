@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
 import { analyzeRing, type RingAnalysis } from '../../src/analysis/ringAnalysis.js';
 import { toReportRing } from '../../src/analysis/ringReport.js';
 import { relativeConfiguration } from '../../src/analysis/substituents.js';
@@ -148,5 +149,36 @@ describe('analyzeRing edge cases', () => {
       'id', 'atoms', 'size', 'puckering', 'shape', 'descriptor', 'torsions', 'substituents',
     ]);
     expect(allFinite(JSON.parse(JSON.stringify(report)))).toBe(true);
+  });
+});
+
+describe('analyzeRing properties', () => {
+  it('analyzeRing of a random distorted pyranose gives the same result for any cyclic input order, never NaN', () => {
+    const jitter = fc.array(fc.double({ min: -0.1, max: 0.1, noNaN: true }), { minLength: 18, maxLength: 18 });
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0, max: 0.8, noNaN: true }),
+        fc.double({ min: 0, max: 180, noNaN: true }),
+        fc.double({ min: 0, max: 359, noNaN: true }),
+        jitter,
+        fc.integer({ min: 0, max: 5 }),
+        fc.boolean(),
+        (Q, theta, phi, dx, start, reverse) => {
+          const points = sixRingAt(Q, theta, phi).map(
+            (p, j) => [p[0] + dx[3 * j]!, p[1] + dx[3 * j + 1]!, p[2] + dx[3 * j + 2]!] as const,
+          );
+          const { mol, graph, ring } = ringMolecule(points, { elements: ['O', 'C', 'C', 'C', 'C', 'C'], hydrogens: true });
+          const base = analyzeRing(mol, graph, ring);
+          const order = ring.map((_, k) => ring[(start + (reverse ? -k : k) + 6) % 6]!);
+          const other = analyzeRing(mol, graph, order);
+          expect(other.atoms).toEqual(base.atoms);
+          expect(other.descriptor).toBe(base.descriptor);
+          expect(other.puckering.Q).toBeCloseTo(base.puckering.Q, 10);
+          expect(allFinite(base)).toBe(true);
+          expect(base.substituents).toHaveLength(12);
+        },
+      ),
+      { seed: 20260501, numRuns: 150 },
+    );
   });
 });
