@@ -71,3 +71,31 @@ export { findDuplicates } from './analysis/duplicates.js';
 export type { DuplicateOptions } from './analysis/duplicates.js';
 export { torsionFingerprint, compareTorsionFingerprints } from './analysis/torsionFingerprint.js';
 export type { FingerprintDifference, TorsionAtoms } from './analysis/torsionFingerprint.js';
+// rings (area C): ring reference order, canonical forms, shape and descriptor, substituents, pseudorotation
+export { altonaSundaralingam, fourierPseudorotation } from './geometry/pseudorotation.js';
+export type { Pseudorotation } from './geometry/pseudorotation.js';
+export { ringReference } from './analysis/ringReference.js';
+export type { RingReference, RingReferenceOptions } from './analysis/ringReference.js';
+export {
+  SIX_RING_FORMS,
+  FIVE_RING_FORMS,
+  THETA_HALF_CHAIR,
+  THETA_ENVELOPE,
+  THETA_SCREW_BOAT,
+} from './analysis/ringForms.js';
+export type { RingShape, FormLetter, ReferencePlane, CanonicalForm } from './analysis/ringForms.js';
+export { formDescriptor, chosenPlane } from './analysis/ringDescriptor.js';
+export type { DescriptorParts, RingDescriptor } from './analysis/ringDescriptor.js';
+export { classifyRing } from './analysis/ringShape.js';
+export type { RingShapeOptions, RingClassification, FormFit, NearForm } from './analysis/ringShape.js';
+export { ringSubstituents, relativeConfiguration } from './analysis/substituents.js';
+export type { RingSubstituent, SubstituentPosition, SubstituentOptions } from './analysis/substituents.js';
+export { analyzeRing } from './analysis/ringAnalysis.js';
+export type {
+  AnalyzeRingOptions,
+  RingAnalysis,
+  RingPuckering,
+  PseudorotationMethod,
+} from './analysis/ringAnalysis.js';
+export { toReportRing } from './analysis/ringReport.js';
+export type { ReportRing } from './analysis/ringReport.js';

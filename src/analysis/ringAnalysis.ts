@@ -1,0 +1,167 @@
+/**
+ * One ring, analysed: reference numbering, Cremer–Pople puckering, shape and IUPAC descriptor, five-ring
+ * pseudorotation, ring torsions and substituent positions. Never NaN: a nearly planar ring gets `planar`,
+ * `phiDeg` null and a warning.
+ */
+import { atomPosition, type Molecule, type Vec3 } from '../model/molecule.js';
+import { usageError, type Warning } from '../model/errors.js';
+import { cremerPople, meanPlane, PHASE_THRESHOLD, type Puckering } from '../geometry/cremerPople.js';
+import { altonaSundaralingam, fourierPseudorotation } from '../geometry/pseudorotation.js';
+import { torsion } from '../geometry/torsion.js';
+import type { Graph } from '../perceive/graph.js';
+import { ringReference } from './ringReference.js';
+import { classifyRing, type FormFit, type RingShapeOptions } from './ringShape.js';
+import { chosenPlane, type DescriptorParts } from './ringDescriptor.js';
+import type { RingShape } from './ringForms.js';
+import { ringSubstituents, type RingSubstituent, type SubstituentOptions } from './substituents.js';
+
+/** Which pseudorotation formula to report for five-rings. */
+export type PseudorotationMethod = 'altona-sundaralingam' | 'fourier';
+
+/** Options of `analyzeRing`. */
+export interface AnalyzeRingOptions extends RingShapeOptions, SubstituentOptions {
+  /** Ring id to carry into the report (e.g. its number in `inspect`). Default none. */
+  readonly id?: number;
+  /** Use `ringAtoms` exactly in the given order (user-given ordered ring). Default false: reference order. */
+  readonly ordered?: boolean;
+  /**
+   * Five-ring pseudorotation formula. `auto` (default) uses the Altona–Sundaralingam formula except where
+   * |cos P| < 0.2 (P near 90 or 270, where ν2/cos P is unstable), where it uses the Fourier form.
+   */
+  readonly pseudorotation?: 'auto' | PseudorotationMethod;
+}
+
+/**
+ * Cremer–Pople numbers as reported: phases withheld where their amplitude is below 0.05 Å, and θ and φ null for a
+ * planar ring (they are noise there).
+ */
+export interface RingPuckering {
+  readonly Q: number;
+  readonly thetaDeg: number | null;
+  readonly phiDeg: number | null;
+  readonly amplitudes: readonly { readonly m: number; readonly q: number; readonly phaseDeg: number | null }[];
+}
+
+/** The analysis of one ring (0-based atoms; `toReportRing` gives the 1-based JSON). */
+export interface RingAnalysis {
+  readonly id?: number;
+  /** Ring atoms in reference order. */
+  readonly atoms: readonly number[];
+  readonly size: number;
+  /** Locant of each position in descriptors. */
+  readonly locants: readonly string[];
+  /** The numbering rule that was applied, in words. */
+  readonly referenceRule: string;
+  readonly puckering: RingPuckering;
+  /** Cremer–Pople unit normal, ring centroid and displacements z_j (Å), for drawings. */
+  readonly normal: Vec3;
+  readonly centre: Vec3;
+  readonly z: readonly number[];
+  /** Five-rings only: AS phase P and amplitude, degrees. */
+  readonly pseudorotation: { phaseDeg: number; amplitudeDeg: number; method: PseudorotationMethod } | null;
+  readonly shape: RingShape;
+  readonly descriptor: string | null;
+  readonly descriptorParts: DescriptorParts | null;
+  readonly descriptorHtml: string | null;
+  readonly fit: FormFit | null;
+  /** Ring torsions j, j+1, j+2, j+3 (mod N), j = 1…N. */
+  readonly torsions: readonly { readonly atoms: readonly number[]; readonly angleDeg: number | null }[];
+  readonly substituents: readonly RingSubstituent[];
+  readonly warnings: readonly Warning[];
+}
+
+function puckeringOf(points: Vec3[]): Puckering {
+  const pk = cremerPople(points);
+  if (pk) return pk;
+  const plane = meanPlane(points); // three-rings: flat by definition
+  if (!plane) throw usageError('degenerate-ring', 'ring atoms are collinear: no mean plane');
+  return { Q: 0, amplitudes: [], thetaDeg: null, phiDeg: null, ...plane, z: plane.z.map(() => 0) };
+}
+
+function pseudorotationOf(nu: (number | null)[], method: 'auto' | PseudorotationMethod): RingAnalysis['pseudorotation'] {
+  if (nu.some((v) => v === null)) return null;
+  const values = nu as number[];
+  const as = altonaSundaralingam(values);
+  const useFourier =
+    method === 'fourier' || as === null || (method === 'auto' && Math.abs(Math.cos((as.phaseDeg * Math.PI) / 180)) < 0.2);
+  const result = useFourier ? fourierPseudorotation(values) : as;
+  return result ? { ...result, method: useFourier ? 'fourier' : 'altona-sundaralingam' } : null;
+}
+
+/**
+ * Analyses one ring of `mol` (atoms 0-based, any cyclic order unless `ordered`).
+ * @example analyzeRing(mol, graph, [0, 1, 2, 3, 4, 5]).descriptor // '1C4'
+ */
+export function analyzeRing(
+  mol: Pick<Molecule, 'atoms' | 'coords'>,
+  graph: Graph,
+  ringAtoms: readonly number[],
+  options: AnalyzeRingOptions = {},
+): RingAnalysis {
+  // 1. Reference numbering and Cremer–Pople coordinates in that numbering.
+  const ref = ringReference(mol, graph, ringAtoms, { ordered: options.ordered ?? false });
+  const atoms = ref.atoms;
+  const n = atoms.length;
+  const label = atoms.map((a) => a + 1).join('-');
+  const pk = puckeringOf(atoms.map((a) => atomPosition(mol, a)));
+  // 2. Shape and descriptor.
+  const cls = classifyRing(pk, ref.locants, options);
+  const warnings: Warning[] = [];
+  const planar = cls.shape === 'planar';
+  if (planar && n > 3) {
+    warnings.push({
+      code: 'ring-nearly-planar',
+      message: `ring ${label} is nearly planar (Q ${pk.Q.toFixed(3)} Å): phase and ring form are undefined`,
+    });
+  }
+  if (cls.fit?.quality === 'distorted') {
+    const [a, b] = cls.fit.nearest.map((f) => f.descriptor ?? f.shape);
+    warnings.push({
+      code: 'ring-form-distorted',
+      message: `ring ${label} is ${cls.fit.distanceDeg.toFixed(1)}° from the nearest form (between ${a} and ${b})`,
+    });
+  }
+  // 3. Ring torsions and, for five-rings, pseudorotation (ν0 = torsion N,1,2,3; ν_k = torsion k).
+  const torsions = atoms.map((_, j) => {
+    const quad = [0, 1, 2, 3].map((k) => atoms[(j + k) % n]!);
+    const [a, b, c, d] = quad.map((x) => atomPosition(mol, x)) as [Vec3, Vec3, Vec3, Vec3];
+    return { atoms: quad, angleDeg: torsion(a, b, c, d) };
+  });
+  if (torsions.some((t) => t.angleDeg === null)) {
+    warnings.push({ code: 'ring-torsion-undefined', message: `ring ${label} has a collinear triple of atoms` });
+  }
+  const nu = n === 5 ? [torsions[4]!, ...torsions.slice(0, 4)].map((t) => t.angleDeg) : [];
+  const pseudorotation = n === 5 && !planar ? pseudorotationOf(nu, options.pseudorotation ?? 'auto') : null;
+  // 4. Substituents.
+  const plane = cls.form ? chosenPlane(cls.form, ref.locants) : null;
+  const substituents = ringSubstituents(mol, graph, atoms, pk.normal, cls.shape, cls.form, plane, options);
+  return {
+    ...(options.id === undefined ? {} : { id: options.id }),
+    atoms,
+    size: n,
+    locants: ref.locants,
+    referenceRule: ref.rule,
+    puckering: {
+      Q: pk.Q,
+      thetaDeg: planar ? null : pk.thetaDeg,
+      phiDeg: planar ? null : pk.phiDeg,
+      amplitudes: pk.amplitudes.map(({ m, q, phaseDeg }) => ({
+        m,
+        q,
+        phaseDeg: phaseDeg === null || Math.abs(q) < PHASE_THRESHOLD ? null : phaseDeg,
+      })),
+    },
+    normal: pk.normal,
+    centre: pk.centre,
+    z: pk.z,
+    pseudorotation,
+    shape: cls.shape,
+    descriptor: cls.descriptor,
+    descriptorParts: cls.descriptorParts,
+    descriptorHtml: cls.descriptorHtml,
+    fit: cls.fit,
+    torsions,
+    substituents,
+    warnings,
+  };
+}
