@@ -1,0 +1,84 @@
+/**
+ * The per-record part of the `inspect` report (DESIGN.md `conformark/report@1`): atoms, bonds, every ring
+ * analysed and, on request, ring ³J(H,H). Pure: the caller supplies a molecule whose bonds are known and the
+ * rings found on its graph; the energy and source come from the api layer.
+ */
+import type { Molecule } from '../model/molecule.js';
+import type { Warning } from '../model/errors.js';
+import type { Graph } from '../perceive/graph.js';
+import { analyzeRing, type AnalyzeRingOptions } from './ringAnalysis.js';
+import { toReportRing, type ReportRing } from './ringReport.js';
+import {
+  isSkippedCoupling,
+  ringCouplings,
+  toCouplingJson,
+  type CouplingJson,
+  type CouplingOptions,
+} from './coupling.js';
+
+/** Options of `recordReport`. */
+export interface RecordReportOptions {
+  /** Add ring ³J(H,H) couplings (`couplings` field). Default false. */
+  readonly couplings?: boolean;
+  /** Coupling equation and parameters (see `CouplingOptions`). */
+  readonly coupling?: CouplingOptions;
+  /** Ring analysis options (thresholds). */
+  readonly ring?: AnalyzeRingOptions;
+}
+
+/** One record of the report (atoms 1-based). */
+export interface RecordReport {
+  index: number;
+  title: string;
+  energy: { value: number; unit: string; field: string } | null;
+  atoms: { id: number; element: string; name: string | null; xyz: [number, number, number] }[];
+  bonds: { atoms: [number, number]; order: number; perceived: boolean }[];
+  rings: ReportRing[];
+  couplings?: (CouplingJson & { ring: number })[];
+  warnings: Warning[];
+}
+
+/**
+ * Builds the report of one record. `rings` are 0-based atom lists in bonded order (from `findRings`).
+ * @example recordReport(mol, graph, findRings(graph)).rings[0]?.shape // 'chair'
+ */
+export function recordReport(
+  mol: Molecule,
+  graph: Graph,
+  rings: readonly (readonly number[])[],
+  options: RecordReportOptions = {},
+): RecordReport {
+  const c = mol.coords;
+  const analysed = rings.map((ring, i) => analyzeRing(mol, graph, ring, { ...options.ring, id: i + 1 }));
+  const report: RecordReport = {
+    index: mol.source.index,
+    title: mol.title,
+    energy: null,
+    atoms: mol.atoms.map((a, i) => ({
+      id: i + 1,
+      element: a.element,
+      name: a.name,
+      xyz: [c[3 * i]!, c[3 * i + 1]!, c[3 * i + 2]!],
+    })),
+    bonds: (mol.bonds ?? []).map((b) => ({ atoms: [b.a + 1, b.b + 1], order: b.order, perceived: b.perceived })),
+    rings: analysed.map(toReportRing),
+    warnings: analysed.flatMap((r) =>
+      r.warnings
+        .filter((w) => !(w.code === 'ring-nearly-planar' && isUnsaturated(graph, r.atoms)))
+        .map((w) => ({ ...w, message: `ring ${r.id}: ${w.message}` })),
+    ),
+  };
+  if (options.couplings) {
+    report.couplings = analysed.flatMap((r) =>
+      ringCouplings(mol, graph, r.atoms, options.coupling)
+        .filter((x) => !isSkippedCoupling(x))
+        .map((x) => ({ ring: r.id ?? 0, ...toCouplingJson(x as Exclude<typeof x, { skipped: string }>) })),
+    );
+  }
+  return report;
+}
+
+/** A ring whose atoms all have at most three neighbours (aromatic or conjugated) is planar by nature: no warning. */
+function isUnsaturated(graph: Graph, atoms: readonly number[]): boolean {
+  return atoms.every((a) => graph.neighbors[a]!.length <= 3);
+}
