@@ -23,3 +23,8 @@ export {
   PHASE_THRESHOLD,
 } from './geometry/cremerPople.js';
 export type { Puckering, PuckeringMode } from './geometry/cremerPople.js';
+// build (area F): SD writer and 3D conformers from SMILES
+export { formatSdf } from './io/writeSdf.js';
+export type { SdfOptions } from './io/writeSdf.js';
+export { buildConformers, BUILD_ENERGY_FIELD } from './api/build.js';
+export type { BuildOptions, BuildResult } from './api/build.js';
