@@ -76,8 +76,9 @@ export function addRingForms(ctx: BuildContext, kept: Candidate[]): void {
       if (found.coords) {
         const shapes = ringShapes(found.coords, ctx.rings);
         const form = shapes[r]!;
-        const phi = target.kind === 'flipped-chair' ? '' : `, φ = ${target.phiDeg.toFixed(0)}`;
-        const start = `${target.kind} start (θ = ${target.thetaDeg.toFixed(0)}${phi})`;
+        // ASCII only: this text goes into the SD file
+        const phi = target.kind === 'flipped-chair' ? '' : `, phi ${target.phiDeg.toFixed(0)}`;
+        const start = `${target.kind} start (theta ${target.thetaDeg.toFixed(0)}${phi})`;
         const candidate: Candidate = {
           coords: found.coords, energy: found.energy, fromSearch: false, shapes,
           origin: `${label}: ${start}${found.nudged ? ', nudged off the boat,' : ''} minimised to ${THE[form]}`,
