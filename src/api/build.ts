@@ -10,7 +10,7 @@
  */
 import type { Molecule } from '../model/molecule.js';
 import { usageError } from '../model/errors.js';
-import { buildError, loadOpenchemlib, minimiseMmff, oclMessage, readCoords, topology, toFileFrame } from './buildOcl.js';
+import { buildError, loadOpenchemlib, minimiseMmff, oclMessage, topology, toFileFrame } from './buildOcl.js';
 import type { Ocl } from './buildOcl.js';
 import { heavyAtomPermutations } from './buildSymmetry.js';
 import { symmetricRmsd } from './buildRmsd.js';

@@ -33,8 +33,8 @@ export function ringTargets(current: { Q: number; thetaDeg: number; phiDeg: numb
   const targets: RingTarget[] = [
     { kind: 'flipped-chair', thetaDeg: 180 - current.thetaDeg, phiDeg: current.phiDeg ?? 0, Q: current.Q },
   ];
-  for (const phi of [30, 90, 150, 210, 270, 330]) targets.push({ kind: 'twist-boat', thetaDeg: 90, phiDeg: phi, Q: BOAT_Q });
-  for (const phi of [0, 120, 240]) targets.push({ kind: 'boat', thetaDeg: 90, phiDeg: phi, Q: BOAT_Q });
+  for (const phiDeg of [30, 90, 150, 210, 270, 330]) targets.push({ kind: 'twist-boat', thetaDeg: 90, phiDeg, Q: BOAT_Q });
+  for (const phiDeg of [0, 120, 240]) targets.push({ kind: 'boat', thetaDeg: 90, phiDeg, Q: BOAT_Q });
   return targets;
 }
 

@@ -8,7 +8,7 @@ import type { Molecule as OclMolecule } from 'openchemlib';
 import type { Ocl } from './buildOcl.js';
 import { chiralSigns, minimiseMmff, writeCoords } from './buildOcl.js';
 import { reshapeRing, ringTargets, ringWalk, sixRingShape } from './buildRingForms.js';
-import type { SixRingShape } from './buildRingForms.js';
+import type { RingTarget, SixRingShape } from './buildRingForms.js';
 
 /** One minimised structure (openchemlib frame). */
 export interface Candidate {
@@ -126,8 +126,8 @@ function relax(ctx: BuildContext, start: Float64Array, ring: readonly number[], 
     if (attempt > 0 || shape.shape !== 'boat' || shape.thetaDeg === null || shape.phiDeg === null) {
       return { coords: result.coords, energy: result.energy, nudged };
     }
-    const target = { kind: 'twist-boat', thetaDeg: shape.thetaDeg, phiDeg: shape.phiDeg + BOAT_NUDGE_DEG, Q: shape.Q } as const;
-    const next = reshapeRing(result.coords, ring, ctx.neighbors, target);
+    const nudge: RingTarget = { kind: 'twist-boat', thetaDeg: shape.thetaDeg, phiDeg: shape.phiDeg + BOAT_NUDGE_DEG, Q: shape.Q };
+    const next = reshapeRing(result.coords, ring, ctx.neighbors, nudge);
     if (!next) return { coords: result.coords, energy: result.energy, nudged };
     start = next;
     nudged = true;

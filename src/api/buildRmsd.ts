@@ -2,8 +2,8 @@
  * Private to `build`: the smallest heavy-atom RMSD between two conformers over the symmetry permutations of
  * `buildSymmetry.ts` and over proper and improper superpositions (so mirror-image conformers of an achiral
  * molecule, such as the two twist-boat enantiomers of cyclohexane, count as one). Optimal rotation by
- * Horn's quaternion method (Horn 1987, J. Opt. Soc. Am. A 4, 629 — from memory): RMSD² = (ΣA² + ΣB² − 2λmax)/N
- * with λmax the largest eigenvalue of the 4×4 key matrix. Area E writes the project's RMSD module; swap at will.
+ * Horn's quaternion method (Horn 1987, J. Opt. Soc. Am. A 4, 629 — from memory):
+ * RMSD² = (ΣA² + ΣB² − 2λmax)/N with λmax the largest eigenvalue of the 4×4 key matrix. Area E writes the project's RMSD module; swap at will.
  */
 
 /**

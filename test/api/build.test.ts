@@ -38,7 +38,7 @@ function sixRing(mol: Molecule, start: number): number[] {
   return walk([start])!;
 }
 
-/** Angle (deg, folded to 0–90) between bond ring atom → substituent and the Cremer–Pople normal (METHODS.md §5). */
+/** Angle (deg, folded to 0–90) between bond ring atom → substituent and the Cremer–Pople normal (METHODS §5). */
 function angleToNormal(mol: Molecule, ring: number[], ringAtom: number, substituent: number): number {
   const p = cremerPople(ring.map((i) => atomPosition(mol, i)))!;
   const bond = sub(atomPosition(mol, substituent), atomPosition(mol, ringAtom));

@@ -38,7 +38,10 @@ function readBack(text: string) {
 }
 
 // openchemlib invents 2D coordinates when every coordinate is 0, so keep them apart from zero
-const coordinate = fc.oneof(fc.double({ min: -60, max: -0.01, noNaN: true }), fc.double({ min: 0.01, max: 60, noNaN: true }));
+const coordinate = fc.oneof(
+  fc.double({ min: -60, max: -0.01, noNaN: true }),
+  fc.double({ min: 0.01, max: 60, noNaN: true }),
+);
 
 describe('formatSdf', () => {
   it('formatSdf round-trips elements, charges, bond orders and coordinates through openchemlib (within 1e-4 Å)', () => {
