@@ -92,7 +92,9 @@ export function minimiseMmff(ocl: Ocl, mol: OclMolecule, maxIterations: number):
   try {
     field = new ocl.ForceFieldMMFF94(mol, 'MMFF94s');
   } catch (err) {
-    throw buildError('mmff-unsupported', `MMFF94s cannot handle this structure: ${oclMessage(err)}`);
+    // openchemlib numbers atoms from 0 in this message; users count from 1
+    const message = oclMessage(err).replace(/\batom (\d+)/g, (_, i: string) => `atom ${Number(i) + 1}`);
+    throw buildError('mmff-unsupported', `MMFF94s cannot handle this structure: ${message}`);
   }
   if (!Number.isFinite(field.getTotalEnergy())) {
     throw buildError('mmff-unsupported', 'MMFF94s gives no finite energy for this structure');

@@ -1,4 +1,5 @@
 import { beforeAll, describe, expect, it } from 'vitest';
+import { Molecule as OclMolecule } from 'openchemlib';
 import { buildConformers, BUILD_ENERGY_FIELD } from '../../src/api/build.js';
 import type { BuildResult } from '../../src/api/build.js';
 import { formatSdf } from '../../src/io/writeSdf.js';
@@ -107,7 +108,12 @@ describe('buildConformers', () => {
   });
 
   it('buildConformers(β-D-glucose) gives a 4C1 chair with every exocyclic heavy atom equatorial', async () => {
-    const { molecules } = await buildConformers('OC[C@H]1O[C@@H](O)[C@H](O)[C@@H](O)[C@@H]1O', { conformers: 3 });
+    const glucose = 'OC[C@H]1O[C@@H](O)[C@H](O)[C@@H](O)[C@@H]1O';
+    const { molecules } = await buildConformers(glucose, { conformers: 3, ringForms: true });
+    // every record, ring forms included, keeps the configuration of the SMILES (read back by openchemlib)
+    const expected = OclMolecule.fromSmiles(glucose).toIsomericSmiles();
+    for (const r of molecules) expect(OclMolecule.fromMolfile(formatSdf([r])).toIsomericSmiles()).toBe(expected);
+    expect(shapes({ molecules, notes: [] })).toContain('twist-boat');
     const m = molecules[0]!;
     const nb = neighbours(m);
     // pyranose order O5, C1, C2, C3, C4, C5 (METHODS.md §2.2): O5 is atom 4 (index 3), C1 the anomeric carbon
@@ -127,6 +133,8 @@ describe('buildConformers', () => {
     const a = await buildConformers('CCCC', { seed: 7, conformers: 4 });
     const b = await buildConformers('CCCC', { seed: 7, conformers: 4 });
     expect(formatSdf(a.molecules)).toBe(formatSdf(b.molecules));
+    const again = await buildConformers('C1CCCCC1', { ringForms: true });
+    expect(formatSdf(again.molecules)).toBe(formatSdf(cyclohexane.molecules));
     const e = a.molecules.map(energy);
     expect([...e].sort((x, y) => x - y)).toEqual(e);
     expect(a.molecules[0]!.title).toBe('CCCC conformer 1');
@@ -156,6 +164,7 @@ describe('buildConformers', () => {
     expect(await failure('   ')).toBe('bad-smiles');
     expect(await failure('Xx')).toBe('bad-smiles');
     expect(await failure('F[Xe]F')).toBe('mmff-unsupported');
+    await expect(buildConformers('F[Xe]F')).rejects.toThrow(/atom 2 \(Xe\)/); // 1-based for the user
     expect(await failure('CCCCCC', { maxIterations: 1 })).toBe('minimisation-failed');
     expect(await failure('CC', { conformers: 0 })).toBe('bad-option');
     expect(await failure('CC', { seed: 1.5 })).toBe('bad-option');
