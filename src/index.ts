@@ -99,3 +99,8 @@ export type {
 } from './analysis/ringAnalysis.js';
 export { toReportRing } from './analysis/ringReport.js';
 export type { ReportRing } from './analysis/ringReport.js';
+// build (area F): SD writer and 3D conformers from SMILES
+export { formatSdf } from './io/writeSdf.js';
+export type { SdfOptions } from './io/writeSdf.js';
+export { buildConformers, BUILD_ENERGY_FIELD } from './api/build.js';
+export type { BuildOptions, BuildResult } from './api/build.js';

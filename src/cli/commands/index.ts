@@ -1,8 +1,10 @@
 /** Registry of subcommands: name → function that adds it to the program. One file per command. */
 import type { Command } from 'commander';
+import { registerBuild } from './build.js';
 
 export type RegisterCommand = (program: Command) => void;
 
 export const COMMANDS = new Map<string, RegisterCommand>([
   // each command file adds one entry here, e.g. ['inspect', registerInspect]
+  ['build', registerBuild],
 ]);
