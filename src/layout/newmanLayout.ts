@@ -158,7 +158,7 @@ export function layoutNewman(view: NewmanView, mol: Molecule, options: NewmanLay
   }
   const captionLines = caption ? newmanCaption(view, mol, marks, angles) : [];
   const capStyle = textStyle(metrics, 'caption');
-  const capTop = y1 + metrics.gap * 2;
+  const capTop = y1 + Math.max(metrics.gap * 2, capStyle.fontSize * 0.7);
   captionLines.forEach((line, k) => {
     const t = textBox(line, capStyle, measure);
     const cy = capTop + t.height / 2 + k * capStyle.fontSize * 1.3;

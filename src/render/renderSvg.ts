@@ -56,7 +56,7 @@ export function renderSvg(scene: Scene, theme: Theme | string = 'column', option
   const canvas = sharedCanvas();
   canvas.clear();
   const root = canvas.node;
-  for (const name of [...root.attributes].map((a) => a.name)) if (name !== 'xmlns') root.removeAttribute(name);
+  for (const name of Array.from(root.attributes, (a) => a.name)) if (name !== 'xmlns') root.removeAttribute(name);
   const w = round(scene.width);
   const h = round(scene.height);
   canvas.attr({

@@ -51,10 +51,10 @@ export function butane(torsionDeg: number): Molecule {
   const c3 = place([0, 1, 0], c1, c2, 1.53, 112, 0);
   const c4 = place(c1, c2, c3, 1.53, 112, torsionDeg);
   const h1 = [60, 180, 300].map((t) => place(c3, c2, c1, 1.09, TET, t));
-  const h2 = [120, 240].map((t) => place(c4, c3, c2, 1.09, TET, t));
-  const h3 = [120, 240].map((t) => place(c1, c2, c3, 1.09, TET, t));
+  // torsion C4–C3–C2–C1 = C1–C2–C3–C4, so the C2 and C3 hydrogens sit at that torsion ± 120
+  const h2 = [120, 240].map((t) => place(c4, c3, c2, 1.09, TET, torsionDeg + t));
+  const h3 = [120, 240].map((t) => place(c1, c2, c3, 1.09, TET, torsionDeg + t));
   const h4 = [60, 180, 300].map((t) => place(c2, c3, c4, 1.09, TET, t));
-  // h2 is placed relative to c4–c3–c2 (torsion c4–c3–c2–H), h3 relative to c1–c2–c3.
   const points = [c1, c2, c3, c4, ...h1, ...h2, ...h3, ...h4];
   return molecule(`butane ${torsionDeg}`, ['C', 'C', 'C', 'C', ...Array(10).fill('H')], points, [
     [0, 1], [1, 2], [2, 3], [0, 4], [0, 5], [0, 6], [1, 7], [1, 8], [2, 9], [2, 10], [3, 11], [3, 12], [3, 13],
