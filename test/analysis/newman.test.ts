@@ -142,6 +142,12 @@ describe('toNewmanJson', () => {
   });
 });
 
+it('butane() test model has tetrahedral front and back sets: azimuths 0/120/240 and C1/C4 + 120° steps', () => {
+  const v = view(butane(65), 1, 2);
+  expect(v.frontSubstituents.map((s) => Math.round(s.azimuthDeg!)).sort((a, b) => a - b)).toEqual([0, 120, 240]);
+  expect(v.backSubstituents.map((s) => Math.round(s.azimuthDeg!)).sort((a, b) => a - b)).toEqual([65, 185, 305]);
+});
+
 // keep `place` referenced so the helper's NeRF sign is pinned here too
 it('place() builds the torsion it is asked for', () => {
   const d = place([0, 1, 0], [0, 0, 0], [1, 0, 0], 1, 109.5, 73);
