@@ -1,0 +1,112 @@
+/** `conformark newman FILE --bond A-B`: Newman projection as SVG/PNG/PDF, or its analysis as JSON. */
+import type { Command } from 'commander';
+import {
+  atomIndex,
+  bondSelection,
+  buildGraph,
+  findRings,
+  newmanFigure,
+  newmanView,
+  protectInput,
+  readRecords,
+  toNewmanJson,
+  usageError,
+  withBonds,
+  writeAtomic,
+  writeFigure,
+  type Molecule,
+  type NewmanAngles,
+  type NewmanHydrogens,
+  type NewmanLabels,
+} from '../../index.js';
+
+interface NewmanFlags {
+  bond: string;
+  record?: string;
+  up?: string;
+  angles?: string;
+  mark?: string[];
+  hydrogens?: string;
+  labels?: string;
+  theme?: string;
+  idPrefix?: string;
+  caption?: boolean;
+  json?: boolean;
+  output?: string;
+}
+
+/** Adds the `newman` command to the program. */
+export function registerNewman(program: Command): void {
+  program
+    .command('newman')
+    .description('Newman projection along a bond, looking from its first atom (front) to its second (back)')
+    .argument('<file>', 'coordinate file (XYZ, SDF/molfile, PDB; .gz read transparently; - for standard input)')
+    .requiredOption('--bond <A-B>', 'the bond, front atom first: numbers from 1 or atom names, e.g. 2-3 or C2-C3')
+    .option('--record <n>', 'record (frame) to draw, counted from 1 (default 1)')
+    .option('--up <atom>', 'front substituent drawn at 12 o\'clock (default: ring neighbour for ring bonds, else the heaviest)')
+    .option('--angles <mode>', 'true: measured projected azimuths; ideal: even 120° spacing with measured torsions printed (default true)')
+    .option('--mark <X:Y...>', 'front:back pairs to mark with a torsion arc (default: the heaviest pair)')
+    .option('--hydrogens <mode>', 'show, hide, or collapse (short unlabelled stubs) (default show)')
+    .option('--labels <mode>', 'element, id (element + number, e.g. C3) or name (atom name from the file) (default element)')
+    .option('--theme <name|path>', 'column (print), projector (slides), contrast (colour-blind-safe), or a theme .json file (default column)')
+    .option('--id-prefix <p>', 'prefix for ids inside the SVG, to keep several figures on one page apart (default newman-)')
+    .option('--no-caption', 'leave out the caption under the drawing')
+    .option('--json', 'print the analysis (conformark/newman@1) instead of a figure')
+    .option('-o, --output <file>', 'write to FILE (.svg, .png or .pdf; .json with --json) instead of standard output')
+    .action(async (file: string, flags: NewmanFlags) => {
+      if (flags.output) protectInput(file);
+      const mol = withBonds(await pickRecord(file, positive('--record', flags.record ?? '1')));
+      const graph = buildGraph(mol.atoms.length, mol.bonds ?? []);
+      const rings = findRings(graph);
+      const [front, back] = bondSelection(mol, graph, flags.bond);
+      const up = flags.up === undefined ? undefined : atomIndex(mol, flags.up);
+      if (flags.json) {
+        const view = newmanView(mol, graph, front, back, { up, rings });
+        for (const w of view.warnings) process.stderr.write(`conformark: warning: ${w.message}\n`);
+        const text = `${JSON.stringify(toNewmanJson(view, mol), null, 2)}\n`;
+        if (flags.output) writeAtomic(flags.output, text);
+        else process.stdout.write(text);
+        return;
+      }
+      const { svg, warnings } = newmanFigure(mol, {
+        bond: [front, back], graph, rings, up,
+        angles: oneOf<NewmanAngles>('--angles', flags.angles, ['true', 'ideal'], 'true'),
+        hydrogens: oneOf<NewmanHydrogens>('--hydrogens', flags.hydrogens, ['show', 'hide', 'collapse'], 'show'),
+        labels: oneOf<NewmanLabels>('--labels', flags.labels, ['element', 'id', 'name'], 'element'),
+        mark: flags.mark?.map((pair) => markPair(mol, pair)),
+        caption: flags.caption !== false,
+        theme: flags.theme,
+        idPrefix: flags.idPrefix,
+      });
+      for (const w of warnings) process.stderr.write(`conformark: warning: ${w.message}\n`);
+      if (flags.output) await writeFigure(flags.output, svg);
+      else process.stdout.write(`${svg}\n`);
+    });
+}
+
+/** Record `n` (from 1) of the file, read lazily so a long trajectory is not parsed past it. */
+async function pickRecord(file: string, n: number): Promise<Molecule> {
+  let count = 0;
+  for await (const mol of readRecords(file)) {
+    if (++count === n) return mol;
+  }
+  throw usageError('no-record', `record ${n} does not exist (the file has ${count} record${count === 1 ? '' : 's'})`, file);
+}
+
+function positive(flag: string, text: string): number {
+  const value = Number(text);
+  if (text.trim() === '' || !Number.isInteger(value) || value < 1) throw usageError('bad-option', `${flag} expects a whole number from 1, got "${text}"`);
+  return value;
+}
+
+function oneOf<T extends string>(flag: string, text: string | undefined, words: readonly T[], fallback: T): T {
+  if (text === undefined) return fallback;
+  if ((words as readonly string[]).includes(text)) return text as T;
+  throw usageError('bad-option', `${flag} expects one of ${words.join(', ')}, got "${text}"`);
+}
+
+function markPair(mol: Molecule, pair: string): [number, number] {
+  const parts = pair.split(':');
+  if (parts.length !== 2 || parts.some((p) => p.trim() === '')) throw usageError('bad-option', `--mark expects front:back atom pairs such as 1:4, got "${pair}"`);
+  return [atomIndex(mol, parts[0]!), atomIndex(mol, parts[1]!)];
+}

@@ -1,0 +1,40 @@
+/** Words of a Newman figure: torsion values, caption lines and the SVG description. */
+import type { Molecule } from '../model/molecule.js';
+import type { NewmanView } from '../analysis/newman.js';
+import type { NewmanAngles } from './newmanAngles.js';
+
+const MINUS = '\u2212';
+
+/** A signed whole-degree torsion as printed (`+65°`, `−65°`, `180°`, `0°`); `n/a` when undefined. */
+export function torsionText(deg: number | null): string {
+  if (deg === null) return 'n/a';
+  const r = Math.round(deg);
+  if (r === 0 || r === 180 || r === -180) return `${Math.abs(r)}°`;
+  return `${r < 0 ? MINUS : '+'}${Math.abs(r)}°`;
+}
+
+const id = (mol: Molecule, i: number) => `${mol.atoms[i]!.element}${i + 1}`;
+
+/** One-line statement of a marked pair: `C1/C4 +65° (+sc, gauche)`. */
+function pairLine(view: NewmanView, mol: Molecule, x: number, y: number): string {
+  const p = view.pairs.find((q) => q.front === x && q.back === y);
+  if (!p || p.torsionDeg === null) return `${id(mol, x)}/${id(mol, y)} undefined`;
+  return `${id(mol, x)}/${id(mol, y)} ${torsionText(p.torsionDeg)} (${p.klynePrelog!.replace('-', MINUS)}, ${p.relation})`;
+}
+
+/** Caption lines: the bond with its conformation, then one line per marked pair. */
+export function newmanCaption(view: NewmanView, mol: Molecule, marks: readonly (readonly [number, number])[], angles: NewmanAngles): string[] {
+  const head = `${id(mol, view.front)}–${id(mol, view.back)}${view.conformation ? `, ${view.conformation}` : ''}${angles === 'ideal' ? ' (ideal spacing)' : ''}`;
+  return [head, ...marks.map(([x, y]) => pairLine(view, mol, x, y))];
+}
+
+/** The `<desc>` text: viewing direction, drawing mode, conformation and marked torsions. */
+export function newmanDescription(view: NewmanView, mol: Molecule, marks: readonly (readonly [number, number])[], angles: NewmanAngles): string {
+  const mode = angles === 'ideal' ? 'bonds at ideal even spacing, measured torsions printed' : 'bonds at their measured projected azimuths';
+  const parts = [
+    `Viewed from ${id(mol, view.front)} (front) towards ${id(mol, view.back)} (back); ${mode}.`,
+    view.conformation ? `Conformation: ${view.conformation} (smallest offset ${Math.round(view.minOffsetDeg!)}°).` : 'Conformation undefined.',
+    ...marks.map(([x, y]) => `${pairLine(view, mol, x, y)}.`),
+  ];
+  return parts.join(' ');
+}
