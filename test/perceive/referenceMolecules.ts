@@ -6,6 +6,7 @@ import { ConformerGenerator, Molecule as OclMolecule, Resources } from 'openchem
 import type { Bond, Molecule } from '../../src/model/molecule.js';
 
 let registered = false;
+const cache = new Map<string, ReferenceMolecule>();
 
 /** A generated molecule: conformark form plus what the reference libraries need. */
 export interface ReferenceMolecule {
@@ -21,8 +22,17 @@ export interface ReferenceMolecule {
   readonly oclRings: number[][];
 }
 
-/** Builds a 3D conformer of `smiles` with openchemlib (seed fixed, so coordinates are reproducible). */
+/** Builds a 3D conformer of `smiles` with openchemlib (seed fixed, so coordinates are reproducible); cached. */
 export function referenceMolecule(label: string, smiles: string, seed = 20261201): ReferenceMolecule {
+  const cacheKey = `${smiles} ${seed}`;
+  const known = cache.get(cacheKey);
+  if (known) return known;
+  const made = generate(label, smiles, seed);
+  cache.set(cacheKey, made);
+  return made;
+}
+
+function generate(label: string, smiles: string, seed: number): ReferenceMolecule {
   if (!registered) {
     Resources.registerFromNodejs();
     registered = true;
@@ -80,7 +90,7 @@ export const REFERENCE_SMILES: readonly (readonly [string, string])[] = [
   ['beta-D-glucopyranose', 'OC[C@H]1O[C@@H](O)[C@H](O)[C@@H](O)[C@@H]1O'],
   ['sucrose', 'OC[C@H]1O[C@H](O[C@]2(CO)O[C@H](CO)[C@@H](O)[C@@H]2O)[C@H](O)[C@@H](O)[C@@H]1O'],
   ['biphenyl', 'c1ccc(cc1)-c1ccccc1'],
-  ['cholesterol', 'C[C@H](CCCC(C)C)[C@H]1CC[C@@H]2[C@@]1(CC[C@H]3[C@H]2CC=C4[C@@]3(CC[C@@H](C4)O)C)C'],
+  ['testosterone', 'C[C@]12CC[C@H]3[C@@H](CCC4=CC(=O)CC[C@]34C)[C@@H]1CC[C@@H]2O'],
   ['triptycene', 'c1ccc2c(c1)C1c3ccccc3C2c2ccccc12'],
   ['morphine', 'CN1CC[C@]23c4c5ccc(O)c4O[C@H]2[C@@H](O)C=C[C@H]3[C@H]1C5'],
   ['[2.2]paracyclophane', 'C1Cc2ccc(cc2)CCc2ccc1cc2'],
