@@ -24,7 +24,6 @@ export function ringSystems(graph: Graph): RingSystem[] {
   for (const edges of blocks) {
     const atomSet = new Set<number>();
     for (const [a, b] of edges) atomSet.add(a).add(b);
-    if (edges.length < atomSet.size) continue; // a bridge, not a ring
     const atoms = [...atomSet].sort((x, y) => x - y);
     const bonds = edges
       .map(([a, b]): [number, number] => (a < b ? [a, b] : [b, a]))
@@ -55,54 +54,65 @@ function pruneTrees(graph: Graph): Uint8Array {
   return alive;
 }
 
-/** Edge lists of the biconnected blocks of the subgraph induced by `alive` atoms. */
+/** Bond lists of the biconnected blocks (bridges left out) of the subgraph induced by `alive` atoms. */
 function biconnectedBlocks(graph: Graph, alive: Uint8Array): [number, number][][] {
   const n = graph.size;
   const disc = new Int32Array(n).fill(-1);
   const low = new Int32Array(n);
   const blocks: [number, number][][] = [];
-  const edgeStack: [number, number][] = [];
+  let bondCount = 0;
+  for (const list of graph.neighbors) bondCount += list.length;
+  // bonds of the current walk, as two parallel stacks of atoms (each bond is pushed at most once)
+  const stackA = new Int32Array(bondCount / 2 + 1);
+  const stackB = new Int32Array(bondCount / 2 + 1);
+  let bonds = 0;
+  // depth-first frames: atom, its parent in the tree, next neighbour position
+  const atom = new Int32Array(n);
+  const parent = new Int32Array(n);
+  const next = new Int32Array(n);
   let time = 0;
   for (let root = 0; root < n; root++) {
     if (!alive[root] || disc[root] !== -1) continue;
     disc[root] = low[root] = time++;
-    // frames: atom, its parent in the DFS tree, next neighbour position
-    const atom: number[] = [root];
-    const parent: number[] = [-1];
-    const next: number[] = [0];
-    while (atom.length > 0) {
-      const top = atom.length - 1;
-      const v = atom[top]!;
+    let depth = 0;
+    atom[0] = root;
+    parent[0] = -1;
+    next[0] = 0;
+    while (depth >= 0) {
+      const v = atom[depth]!;
       const list = graph.neighbors[v]!;
-      if (next[top]! < list.length) {
-        const w = list[next[top]!++]!;
+      if (next[depth]! < list.length) {
+        const w = list[next[depth]!++]!;
         if (!alive[w]) continue;
         if (disc[w] === -1) {
-          edgeStack.push([v, w]);
+          stackA[bonds] = v;
+          stackB[bonds++] = w;
           disc[w] = low[w] = time++;
-          atom.push(w);
-          parent.push(v);
-          next.push(0);
-        } else if (w !== parent[top] && disc[w]! < disc[v]!) {
-          edgeStack.push([v, w]);
+          depth++;
+          atom[depth] = w;
+          parent[depth] = v;
+          next[depth] = 0;
+        } else if (w !== parent[depth] && disc[w]! < disc[v]!) {
+          stackA[bonds] = v;
+          stackB[bonds++] = w;
           low[v] = Math.min(low[v]!, disc[w]!);
         }
         continue;
       }
-      const p = parent[top]!;
-      atom.pop();
-      parent.pop();
-      next.pop();
+      const p = parent[depth]!;
+      depth--;
       if (p === -1) continue;
       low[p] = Math.min(low[p]!, low[v]!);
       if (low[v]! >= disc[p]!) {
-        const block: [number, number][] = [];
-        for (;;) {
-          const e = edgeStack.pop()!;
-          block.push(e);
-          if (e[0] === p && e[1] === v) break;
+        // the block is everything above the tree bond p–v; a lone bond is a bridge and is dropped
+        let bottom = bonds - 1;
+        while (stackA[bottom] !== p || stackB[bottom] !== v) bottom--;
+        if (bottom < bonds - 1) {
+          const block: [number, number][] = [];
+          for (let k = bottom; k < bonds; k++) block.push([stackA[k]!, stackB[k]!]);
+          blocks.push(block);
         }
-        blocks.push(block);
+        bonds = bottom;
       }
     }
   }
