@@ -28,6 +28,7 @@ export function minimumCycleBasis(system: RingSystem): number[][] {
   const v = atoms.length;
   const rank = bonds.length - v + 1;
   if (rank <= 0) return [];
+  if (rank === 1) return [simpleCycle(system)];
   const local = new Map<number, number>(atoms.map((a, i) => [a, i]));
   const adjacency: number[][] = Array.from({ length: v }, () => []);
   const bondId = new Map<number, number>();
@@ -39,7 +40,6 @@ export function minimumCycleBasis(system: RingSystem): number[][] {
     bondId.set(x * v + y, id).set(y * v + x, id);
   });
   for (const list of adjacency) list.sort((p, q) => p - q);
-  if (rank === 1) return [walkCycle(adjacency).map((i) => atoms[i]!)];
   const words = Math.ceil(bonds.length / 32);
   const bitsOf = (cycle: readonly number[]): Uint32Array => {
     const bits = new Uint32Array(words);
@@ -118,15 +118,21 @@ function hortonCandidates(adjacency: readonly (readonly number[])[]): number[][]
   return out;
 }
 
-/** The atoms of a simple cycle (every atom has two neighbours) in bonded order from local atom 0. */
-function walkCycle(adjacency: readonly (readonly number[])[]): number[] {
-  const cycle = [0];
+/** A block with as many bonds as atoms is one simple cycle: walk it in bonded order from its lowest atom. */
+function simpleCycle(system: RingSystem): number[] {
+  const partners = new Map<number, number[]>();
+  for (const [a, b] of system.bonds) {
+    (partners.get(a) ?? partners.set(a, []).get(a)!).push(b);
+    (partners.get(b) ?? partners.set(b, []).get(b)!).push(a);
+  }
+  const first = system.atoms[0]!;
+  const cycle = [first];
   let previous = -1;
-  let current = 0;
+  let current = first;
   for (;;) {
-    const [p, q] = adjacency[current]!;
+    const [p, q] = partners.get(current)!;
     const next = p === previous ? q! : p!;
-    if (next === 0) return cycle;
+    if (next === first) return cycle;
     cycle.push(next);
     previous = current;
     current = next;

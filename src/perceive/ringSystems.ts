@@ -18,36 +18,60 @@ export interface RingSystem {
  * @example ringSystems(buildGraph(3, triangleBonds)).length // 1
  */
 export function ringSystems(graph: Graph): RingSystem[] {
-  const alive = pruneTrees(graph);
-  const blocks = biconnectedBlocks(graph, alive);
-  const systems: RingSystem[] = [];
-  for (const edges of blocks) {
-    const atomSet = new Set<number>();
-    for (const [a, b] of edges) atomSet.add(a).add(b);
-    const atoms = [...atomSet].sort((x, y) => x - y);
-    const bonds = edges
-      .map(([a, b]): [number, number] => (a < b ? [a, b] : [b, a]))
-      .sort((p, q) => p[0] - q[0] || p[1] - q[1]);
-    systems.push({ atoms, bonds });
-  }
+  const csr = compact(graph);
+  const alive = pruneTrees(csr);
+  const blocks = biconnectedBlocks(csr, alive);
+  const stamp = new Int32Array(graph.size).fill(-1);
+  const systems: RingSystem[] = blocks.map((edges, id) => {
+    const atoms: number[] = [];
+    for (const edge of edges) {
+      if (edge[0] > edge[1]) edge.reverse();
+      for (const atom of edge) {
+        if (stamp[atom] !== id) {
+          stamp[atom] = id;
+          atoms.push(atom);
+        }
+      }
+    }
+    atoms.sort((x, y) => x - y);
+    edges.sort((p, q) => p[0] - q[0] || p[1] - q[1]);
+    return { atoms, bonds: edges };
+  });
   return systems.sort((p, q) => p.atoms[0]! - q.atoms[0]!);
 }
 
-/** Marks atoms that survive repeated removal of atoms with at most one remaining neighbour. */
-function pruneTrees(graph: Graph): Uint8Array {
+/** Neighbour lists packed into two typed arrays: neighbours of v are `list[start[v]…start[v + 1]]`. */
+interface Packed {
+  readonly size: number;
+  readonly start: Int32Array;
+  readonly list: Int32Array;
+}
+
+function compact(graph: Graph): Packed {
   const n = graph.size;
+  const start = new Int32Array(n + 1);
+  for (let v = 0; v < n; v++) start[v + 1] = start[v]! + graph.neighbors[v]!.length;
+  const list = new Int32Array(start[n]!);
+  for (let v = 0; v < n; v++) list.set(graph.neighbors[v]!, start[v]!);
+  return { size: n, start, list };
+}
+
+/** Marks atoms that survive repeated removal of atoms with at most one remaining neighbour. */
+function pruneTrees(graph: Packed): Uint8Array {
+  const { size: n, start, list } = graph;
   const degree = new Int32Array(n);
   const alive = new Uint8Array(n).fill(1);
   const queue: number[] = [];
   for (let v = 0; v < n; v++) {
-    degree[v] = graph.neighbors[v]!.length;
+    degree[v] = start[v + 1]! - start[v]!;
     if (degree[v]! <= 1) queue.push(v);
   }
   for (let head = 0; head < queue.length; head++) {
     const v = queue[head]!;
     if (!alive[v]) continue;
     alive[v] = 0;
-    for (const w of graph.neighbors[v]!) {
+    for (let k = start[v]!; k < start[v + 1]!; k++) {
+      const w = list[k]!;
       if (alive[w] && --degree[w]! === 1) queue.push(w);
     }
   }
@@ -55,13 +79,12 @@ function pruneTrees(graph: Graph): Uint8Array {
 }
 
 /** Bond lists of the biconnected blocks (bridges left out) of the subgraph induced by `alive` atoms. */
-function biconnectedBlocks(graph: Graph, alive: Uint8Array): [number, number][][] {
-  const n = graph.size;
+function biconnectedBlocks(graph: Packed, alive: Uint8Array): [number, number][][] {
+  const { size: n, start, list } = graph;
   const disc = new Int32Array(n).fill(-1);
   const low = new Int32Array(n);
   const blocks: [number, number][][] = [];
-  let bondCount = 0;
-  for (const list of graph.neighbors) bondCount += list.length;
+  const bondCount = list.length;
   // bonds of the current walk, as two parallel stacks of atoms (each bond is pushed at most once)
   const stackA = new Int32Array(bondCount / 2 + 1);
   const stackB = new Int32Array(bondCount / 2 + 1);
@@ -80,9 +103,8 @@ function biconnectedBlocks(graph: Graph, alive: Uint8Array): [number, number][][
     next[0] = 0;
     while (depth >= 0) {
       const v = atom[depth]!;
-      const list = graph.neighbors[v]!;
-      if (next[depth]! < list.length) {
-        const w = list[next[depth]!++]!;
+      if (next[depth]! < start[v + 1]! - start[v]!) {
+        const w = list[start[v]! + next[depth]!++]!;
         if (!alive[w]) continue;
         if (disc[w] === -1) {
           stackA[bonds] = v;
