@@ -130,3 +130,13 @@ export { newmanFigure } from './api/newman.js';
 export type { NewmanFigure, NewmanFigureOptions } from './api/newman.js';
 export { writeFigure, figureFormat, figureBytes, FIGURE_FORMATS } from './api/writeFigure.js';
 export type { FigureFormat, WriteFigureOptions } from './api/writeFigure.js';
+// perceive (area B): bonds from coordinates, rings, selections
+export { perceiveBonds, BOND_TOLERANCE_A, MIN_BOND_LENGTH_A } from './perceive/perceiveBonds.js';
+export type { PerceiveBondsOptions } from './perceive/perceiveBonds.js';
+export { withBonds } from './perceive/withBonds.js';
+export { findRings, canonicalRing } from './perceive/findRings.js';
+export { ringSystems } from './perceive/ringSystems.js';
+export type { RingSystem } from './perceive/ringSystems.js';
+export { atomIndex } from './perceive/atomIndex.js';
+export { bondSelection, bondListSelection } from './perceive/bondSelection.js';
+export { ringSelection } from './perceive/ringSelection.js';
