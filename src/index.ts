@@ -140,3 +140,13 @@ export type { RingSystem } from './perceive/ringSystems.js';
 export { atomIndex } from './perceive/atomIndex.js';
 export { bondSelection, bondListSelection } from './perceive/bondSelection.js';
 export { ringSelection } from './perceive/ringSelection.js';
+// shared record preparation (integrator)
+export { prepareRecord, readRecord } from './api/prepare.js';
+export type { PreparedRecord } from './api/prepare.js';
+// inspect (integrator)
+export { inspectFile, inspectMolecule } from './api/inspect.js';
+export type { InspectOptions, InspectReport } from './api/inspect.js';
+export { inspectText } from './api/inspectText.js';
+export { jsonText } from './api/jsonText.js';
+export { recordReport } from './analysis/recordReport.js';
+export type { RecordReport, RecordReportOptions } from './analysis/recordReport.js';
