@@ -23,3 +23,19 @@ export {
   PHASE_THRESHOLD,
 } from './geometry/cremerPople.js';
 export type { Puckering, PuckeringMode } from './geometry/cremerPople.js';
+// io (area A): readers, format detection, energies, XYZ writer
+export { parseText, parseTextSettled } from './io/parseText.js';
+export type { ParseTextOptions } from './io/parseText.js';
+export { readRecords, readRecordsSettled } from './io/readRecords.js';
+export type { StreamOptions } from './io/readRecords.js';
+export { readFrames } from './io/readFrames.js';
+export type { Frame, FrameOptions } from './io/readFrames.js';
+export type { Settled } from './io/sink.js';
+export type { ReadOptions } from './io/limits.js';
+export { DEFAULT_LIMITS } from './io/limits.js';
+export { detectFormat, formatFromExtension } from './io/detectFormat.js';
+export { findEnergy, toKcalPerMol, normalizeEnergyUnit } from './io/energy.js';
+export type { Energy, EnergyUnit, EnergyOptions, FoundEnergy } from './io/energy.js';
+export { formatXyz } from './io/formatXyz.js';
+export type { FormatXyzOptions } from './io/formatXyz.js';
+export { parseXyzComment } from './io/xyzComment.js';
