@@ -33,6 +33,9 @@ export class V3000Reader {
 
   /** Feeds one line of the record; returns an issue when the line is bad. */
   feed(line: string, lineNo: number): Issue | null {
+    if (line.startsWith('M  END')) {
+      return issue('truncated', this.file, lineNo, 'the V3000 table ends without END CTAB');
+    }
     if (!line.startsWith('M  V30 ')) {
       return issue('bad-v3000', this.file, lineNo, `expected an 'M  V30' line inside the V3000 table, found ${quote(line)}`);
     }

@@ -22,6 +22,9 @@ const enum State {
   Skip,
 }
 
+/** A line of small integers only: a bond line where an atom line was expected. */
+const BOND_LIKE = /^(\s*\d{1,3}){3,7}\s*$/;
+
 export class SdfConsumer implements LineConsumer {
   private state = State.Header;
   private header: string[] = [];
@@ -108,6 +111,7 @@ export class SdfConsumer implements LineConsumer {
   private atomLine(line: string, lineNo: number): void {
     if (line.startsWith('M  ')) return this.fail(issue('wrong-count', this.file, this.countsLine, this.truncation()));
     if (line.startsWith('> ')) return this.fail(issue('truncated', this.file, this.countsLine, this.truncation()));
+    if (BOND_LIKE.test(line)) return this.fail(issue('wrong-count', this.file, this.countsLine, this.truncation()));
     const atom = parseV2000Atom(line);
     if ('code' in atom) return this.fail(issue(atom.code, this.file, lineNo, atom.message));
     const { element, x, y, z, charge } = atom;
