@@ -69,7 +69,7 @@ function unitFromName(name: string): EnergyUnit | null {
   if (lower.includes('kcal')) return 'kcal/mol';
   if (/kj/.test(lower)) return 'kJ/mol';
   if (lower.includes('hartree')) return 'hartree';
-  const words = name.replace(/([a-z])([A-Z])/g, '$1 $2').toLowerCase().split(/[^a-z.]+/);
+  const words = name.replace(/([a-z])([A-Z][a-z])/g, '$1 $2').toLowerCase().split(/[^a-z.]+/);
   for (const w of words) {
     if (w === 'eh' || w === 'au' || w === 'a.u.') return 'hartree';
     if (w === 'ev') return 'eV';
