@@ -58,10 +58,11 @@ export class RecordBuilder {
 
   /**
    * Checks and returns the record. `withBonds` false gives `bonds: null` (bonds are then perceived).
-   * Returns an issue for overlapping atoms (naming both atoms, at the line of the second).
+   * Returns an issue for a record without atoms, or for overlapping atoms (naming both, at the second's line).
    */
   finish(title: string, properties: Record<string, string>, index: number, line: number, withBonds: boolean): Molecule | Issue {
     const n = this.atoms.length;
+    if (n === 0) return issue('empty-record', this.file, line, 'record has no atoms');
     const coords = Float64Array.from(this.coords);
     const pair = findOverlap(coords, n, this.limits.minDistanceA);
     if (pair) {
