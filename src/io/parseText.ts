@@ -14,6 +14,8 @@ export interface ParseTextOptions extends ReadOptions {
   readonly file?: string;
 }
 
+const PIECE = 1 << 20;
+
 /** Most issues collected into one `ParseError` by `parseText`. */
 const MAX_ISSUES = 100;
 
@@ -40,9 +42,13 @@ export function parseTextSettled(text: string, options: ParseTextOptions = {}): 
     const feed = (lines: string[], first: number): void => {
       for (let k = 0; k < lines.length && !fatal; k++) consumer.feed(lines[k]!, first + k);
     };
-    feed(splitter.pushText(text), 1);
-    const before = splitter.lastLine;
-    feed(splitter.end(), before + 1);
+    // pieces of about 1 MiB keep the line arrays short-lived, as in streaming
+    for (let at = 0; at < text.length && !fatal; at += PIECE) {
+      const first = splitter.lastLine + 1;
+      feed(splitter.pushText(text.slice(at, at + PIECE)), first);
+    }
+    const first = splitter.lastLine + 1;
+    if (!fatal) feed(splitter.end(), first);
     if (!fatal) consumer.end(splitter.lastLine);
   } catch (err) {
     if (!(err instanceof ParseError)) throw err;

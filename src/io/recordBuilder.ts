@@ -12,9 +12,8 @@ export class RecordBuilder {
   readonly atoms: Atom[] = [];
   /** Line of each atom, for messages. */
   readonly atomLines: number[] = [];
-  private coords: number[] = [];
+  private coords = new Float64Array(48);
   private bonds: Bond[] = [];
-  private bondKeys = new Set<number>();
 
   constructor(
     private readonly file: string,
@@ -35,10 +34,23 @@ export class RecordBuilder {
     if (this.atoms.length >= this.limits.maxAtoms) {
       return issue('too-many-atoms', this.file, line, `more than ${this.limits.maxAtoms} atoms in one record (option maxAtoms)`);
     }
+    const k = 3 * this.atoms.length;
+    if (k + 3 > this.coords.length) this.reserve(2 * this.atoms.length + 16);
+    this.coords[k] = x;
+    this.coords[k + 1] = y;
+    this.coords[k + 2] = z;
     this.atoms.push(atom);
     this.atomLines.push(line);
-    this.coords.push(x, y, z);
     return null;
+  }
+
+  /** Makes room for `n` atoms (a hint from a counts line; never trusted beyond `maxAtoms`). */
+  reserve(n: number): void {
+    const size = 3 * Math.min(n, this.limits.maxAtoms);
+    if (size <= this.coords.length) return;
+    const next = new Float64Array(size);
+    next.set(this.coords);
+    this.coords = next;
   }
 
   /** Replaces atom `i` (for charges given after the atom block). */
@@ -48,12 +60,22 @@ export class RecordBuilder {
 
   /** Adds a bond between 0-based atoms `a` and `b` (both must exist); a repeated pair is ignored. */
   addBond(a: number, b: number, order: number): void {
-    const lo = Math.min(a, b);
-    const hi = Math.max(a, b);
-    const key = lo * 4_294_967_296 + hi;
-    if (this.bondKeys.has(key)) return;
-    this.bondKeys.add(key);
+    const lo = a < b ? a : b;
+    const hi = a < b ? b : a;
     this.bonds.push({ a: lo, b: hi, order, perceived: false });
+  }
+
+  /** The bonds without repeats (first one kept); a Set per bond was the hot spot of SDF reading. */
+  private uniqueBonds(): Bond[] {
+    const bonds = this.bonds;
+    if (!hasRepeat(bonds)) return bonds;
+    const keep = new Set<number>();
+    return bonds.filter((b) => {
+      const key = b.a * 4_294_967_296 + b.b;
+      if (keep.has(key)) return false;
+      keep.add(key);
+      return true;
+    });
   }
 
   /**
@@ -63,7 +85,7 @@ export class RecordBuilder {
   finish(title: string, properties: Record<string, string>, index: number, line: number, withBonds: boolean): Molecule | Issue {
     const n = this.atoms.length;
     if (n === 0) return issue('empty-record', this.file, line, 'record has no atoms');
-    const coords = Float64Array.from(this.coords);
+    const coords = this.coords.length === 3 * n ? this.coords : this.coords.slice(0, 3 * n);
     const pair = findOverlap(coords, n, this.limits.minDistanceA);
     if (pair) {
       const [i, j] = pair;
@@ -74,9 +96,23 @@ export class RecordBuilder {
       title,
       atoms: this.atoms,
       coords,
-      bonds: withBonds ? this.bonds : null,
+      bonds: withBonds ? this.uniqueBonds() : null,
       properties,
       source: { file: this.file, format: this.format, index, line },
     };
   }
+}
+
+/** True when a pair occurs twice: quadratic scan for the usual small records, a Set beyond. */
+function hasRepeat(bonds: readonly Bond[]): boolean {
+  const n = bonds.length;
+  if (n > 256) return new Set(bonds.map((b) => b.a * 4_294_967_296 + b.b)).size !== n;
+  for (let j = 1; j < n; j++) {
+    const bj = bonds[j]!;
+    for (let i = 0; i < j; i++) {
+      const bi = bonds[i]!;
+      if (bi.a === bj.a && bi.b === bj.b) return true;
+    }
+  }
+  return false;
 }

@@ -3,7 +3,7 @@
  * or V3000 connection table, `M  CHG` charges, `M  END`, then `> <name>` data fields up to `$$$$`. Bonds and
  * orders come from the file. A bad record is reported and reading resumes after its `$$$$`.
  */
-import type { Molecule } from '../model/molecule.js';
+import type { Atom, Molecule } from '../model/molecule.js';
 import type { Issue } from '../model/errors.js';
 import type { ReadLimits } from './limits.js';
 import { parseChargeLine, parseCounts, parseV2000Atom, parseV2000Bond } from './molV2000.js';
@@ -24,6 +24,16 @@ const enum State {
 
 /** A line of small integers only: a bond line where an atom line was expected. */
 const BOND_LIKE = /^(\s*\d{1,3}){3,7}\s*$/;
+
+const neutral = new Map<string, Atom>();
+
+/** Atoms are immutable, so the neutral atom of each element is shared between records. */
+function molAtom(element: string, charge: number): Atom {
+  if (charge !== 0) return { element, name: null, charge };
+  let atom = neutral.get(element);
+  if (!atom) neutral.set(element, (atom = Object.freeze({ element, name: null, charge: 0 })));
+  return atom;
+}
 
 export class SdfConsumer implements LineConsumer {
   private state = State.Header;
@@ -105,17 +115,20 @@ export class SdfConsumer implements LineConsumer {
       return this.fail(issue('too-many-atoms', this.file, lineNo, message));
     }
     this.counts = counts;
+    this.builder.reserve(counts.atoms);
     this.state = counts.atoms > 0 ? State.Atoms : counts.bonds > 0 ? State.Bonds : State.Props;
   }
 
   private atomLine(line: string, lineNo: number): void {
     if (line.startsWith('M  ')) return this.fail(issue('wrong-count', this.file, this.countsLine, this.truncation()));
     if (line.startsWith('> ')) return this.fail(issue('truncated', this.file, this.countsLine, this.truncation()));
-    if (BOND_LIKE.test(line)) return this.fail(issue('wrong-count', this.file, this.countsLine, this.truncation()));
     const atom = parseV2000Atom(line);
-    if ('code' in atom) return this.fail(issue(atom.code, this.file, lineNo, atom.message));
+    if ('code' in atom) {
+      if (BOND_LIKE.test(line)) return this.fail(issue('wrong-count', this.file, this.countsLine, this.truncation()));
+      return this.fail(issue(atom.code, this.file, lineNo, atom.message));
+    }
     const { element, x, y, z, charge } = atom;
-    const err = this.builder.addAtom({ element, name: null, charge }, x, y, z, lineNo);
+    const err = this.builder.addAtom(molAtom(element, charge), x, y, z, lineNo);
     if (err) return this.fail(err);
     if (this.builder.atomCount === this.counts.atoms) this.state = this.counts.bonds > 0 ? State.Bonds : State.Props;
   }
@@ -128,10 +141,9 @@ export class SdfConsumer implements LineConsumer {
     if (typeof bond === 'string') return this.fail(issue('bad-bond', this.file, lineNo, bond));
     const n = this.builder.atomCount;
     const number = this.bondsRead + 1;
-    for (const end of [bond.a, bond.b]) {
-      if (end < 1 || end > n) {
-        return this.fail(issue('bad-bond', this.file, lineNo, `bond ${number} refers to atom ${end}, but the record has ${n} atoms`));
-      }
+    if (bond.a < 1 || bond.a > n || bond.b < 1 || bond.b > n) {
+      const end = bond.a < 1 || bond.a > n ? bond.a : bond.b;
+      return this.fail(issue('bad-bond', this.file, lineNo, `bond ${number} refers to atom ${end}, but the record has ${n} atoms`));
     }
     if (bond.a === bond.b) return this.fail(issue('bad-bond', this.file, lineNo, `bond ${number} joins atom ${bond.a} to itself`));
     this.builder.addBond(bond.a - 1, bond.b - 1, bond.order);
