@@ -167,3 +167,8 @@ export type { Energy, EnergyOptions, FoundEnergy } from './io/energy.js';
 export { formatXyz } from './io/formatXyz.js';
 export type { FormatXyzOptions } from './io/formatXyz.js';
 export { parseXyzComment } from './io/xyzComment.js';
+
+// area J (robustness): file-system reasons in words
+export { fsReason, isSystemError } from './io/fsReason.js';
+export { safeText, sceneTextWarnings, MAX_LABEL_LENGTH, type SafeText } from './layout/safeText.js';
+export { heldRecords, resolveHoldLimits, DEFAULT_HOLD_LIMITS, type HoldOptions, type HoldLimits } from './api/holdLimits.js';

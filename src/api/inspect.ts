@@ -9,6 +9,7 @@ import { detectFormat } from '../io/detectFormat.js';
 import { findEnergy, type EnergyOptions } from '../io/energy.js';
 import { recordReport, type RecordReport, type RecordReportOptions } from '../analysis/recordReport.js';
 import { prepareRecord } from './prepare.js';
+import { heldRecords, type HoldOptions } from './holdLimits.js';
 
 /** Options of `inspectFile` / `inspectMolecule`. */
 export interface InspectOptions extends RecordReportOptions {
@@ -18,6 +19,8 @@ export interface InspectOptions extends RecordReportOptions {
   readonly read?: StreamOptions;
   /** Bond tolerance for perception, Å (default 0.40). */
   readonly toleranceA?: number;
+  /** Caps on what the report holds: records and atoms over all records (defaults 100,000 and 2,000,000). */
+  readonly hold?: HoldOptions;
 }
 
 /** The whole report. */
@@ -51,7 +54,7 @@ export function inspectMolecule(mol: Molecule, options: InspectOptions = {}): Re
 export async function inspectFile(path: string, options: InspectOptions = {}): Promise<InspectReport> {
   const records: RecordReport[] = [];
   let format: FormatName | null = options.read?.format ?? null;
-  for await (const mol of readRecords(path, options.read)) {
+  for await (const mol of heldRecords(readRecords(path, options.read), path, options.hold)) {
     format ??= mol.source.format;
     records.push(inspectMolecule(mol, options));
   }

@@ -2,6 +2,7 @@
 import type { RecordReport } from '../analysis/recordReport.js';
 import type { ReportRing } from '../analysis/ringReport.js';
 import type { InspectReport } from './inspect.js';
+import { safeText } from '../layout/safeText.js';
 
 const fixed = (v: number | null, digits: number, unit = ''): string => (v === null ? '—' : `${v.toFixed(digits)}${unit}`);
 const signed = (v: number | null): string => (v === null ? '—' : `${v >= 0 ? '+' : '−'}${Math.abs(v).toFixed(1)}`);
@@ -19,7 +20,7 @@ export function inspectText(report: InspectReport): string {
 function atomLabel(record: RecordReport, id: number): string {
   const atom = record.atoms[id - 1];
   if (!atom) return String(id);
-  return atom.name && atom.name !== atom.element ? `${atom.name}(${id})` : `${atom.element}${id}`;
+  return atom.name && atom.name !== atom.element ? `${safeText(atom.name, 40).text}(${id})` : `${atom.element}${id}`;
 }
 
 function recordText(record: RecordReport): string {
@@ -31,7 +32,9 @@ function recordText(record: RecordReport): string {
     `${nr} ring${nr === 1 ? '' : 's'}`,
   ];
   if (record.energy) facts.push(`energy ${record.energy.value} ${record.energy.unit} (${record.energy.field})`);
-  const lines = [`record ${record.index}${record.title ? `  "${record.title}"` : ''}`, `  ${facts.join(' · ')}`];
+  // titles come from files: no terminal control sequences, bounded length
+  const title = safeText(record.title).text;
+  const lines = [`record ${record.index}${title ? `  "${title}"` : ''}`, `  ${facts.join(' · ')}`];
   for (const ring of record.rings) lines.push(...ringText(record, ring));
   if (record.couplings && record.couplings.length > 0) {
     lines.push(`  ³J(H,H) predictions (${record.couplings[0]!.method}; estimates, typical error about 1 Hz)`);

@@ -10,6 +10,7 @@ import type { Theme } from '../render/theme.js';
 import { loadTheme, sceneMetrics } from '../render/themes.js';
 import { measureText } from '../render/svgWindow.js';
 import { renderSvg } from '../render/renderSvg.js';
+import { sceneTextWarnings } from '../layout/safeText.js';
 
 /** Options of {@link newmanFigure}. Atom indices are 0-based. */
 export interface NewmanFigureOptions extends Omit<NewmanLayoutOptions, 'metrics' | 'measure' | 'couplings'> {
@@ -58,7 +59,8 @@ export function newmanFigure(mol: Molecule, options: NewmanFigureOptions): Newma
     : [];
   const scene = layoutNewman(view, mol, { ...options, couplings, metrics: sceneMetrics(theme), measure: measureText });
   const svg = renderSvg(scene, theme, { idPrefix: options.idPrefix });
-  return { svg, view, scene, warnings: [...view.warnings, ...couplings.flatMap((c) => c.warnings)], couplings };
+  const warnings = [...view.warnings, ...couplings.flatMap((c) => c.warnings), ...sceneTextWarnings(scene)];
+  return { svg, view, scene, warnings, couplings };
 }
 
 function graphOf(mol: Molecule): Graph {

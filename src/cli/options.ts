@@ -1,5 +1,6 @@
 /** Option parsing shared by every command: whole numbers, enumerations, warnings on stderr. */
-import { usageError, type Warning } from '../index.js';
+import type { Command } from 'commander';
+import { DEFAULT_HOLD_LIMITS, DEFAULT_LIMITS, safeText, usageError, type HoldOptions, type ReadOptions, type Warning } from '../index.js';
 
 /** A whole number ≥ `min` from a flag's text. */
 export function wholeNumber(flag: string, text: string, min = 1): number {
@@ -29,5 +30,33 @@ export function oneOf<T extends string>(flag: string, text: string | undefined, 
 
 /** Prints warnings, one line each, on stderr. */
 export function printWarnings(warnings: readonly Warning[], where = ''): void {
-  for (const w of warnings) process.stderr.write(`conformark: warning: ${where ? `${where}: ` : ''}${w.message}\n`);
+  for (const w of warnings) process.stderr.write(`conformark: warning: ${safeText(`${where ? `${where}: ` : ''}${w.message}`, 1000).text}\n`);
+}
+
+/** The input limits every reading command shares; global options, given before or after the command. */
+export interface LimitFlags {
+  maxAtoms?: string;
+  maxLineLength?: string;
+  maxRecords?: string;
+  maxTotalAtoms?: string;
+}
+
+/** Adds the limit options to the program (inherited by every command). */
+export function addLimitOptions(program: Command): Command {
+  return program
+    .option('--max-atoms <n>', `most atoms in one record (default ${DEFAULT_LIMITS.maxAtoms})`)
+    .option('--max-line-length <n>', `longest input line, characters (default ${DEFAULT_LIMITS.maxLineLength})`)
+    .option('--max-records <n>', `most records read; commands that hold every record (inspect, ensemble) default to ${DEFAULT_HOLD_LIMITS.maxRecords}`)
+    .option('--max-total-atoms <n>', `most atoms over all records for commands that hold every record (default ${DEFAULT_HOLD_LIMITS.maxTotalAtoms})`);
+}
+
+/** Reader and hold limits from the global options of `command`'s program. */
+export function limitsOf(command: Command): { read: ReadOptions; hold: HoldOptions } {
+  const flags = command.optsWithGlobals<LimitFlags>();
+  const n = (flag: string, text: string | undefined): number | undefined => (text === undefined ? undefined : wholeNumber(flag, text));
+  const maxRecords = n('--max-records', flags.maxRecords);
+  return {
+    read: { maxAtoms: n('--max-atoms', flags.maxAtoms), maxLineLength: n('--max-line-length', flags.maxLineLength), maxRecords },
+    hold: { maxRecords, maxTotalAtoms: n('--max-total-atoms', flags.maxTotalAtoms) },
+  };
 }

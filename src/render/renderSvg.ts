@@ -9,6 +9,10 @@ import { usageError } from '../model/errors.js';
 import type { Primitive, RoleStyle, Theme } from './theme.js';
 import { loadTheme } from './themes.js';
 import { sharedCanvas } from './svgWindow.js';
+import { MAX_LABEL_LENGTH, safeText } from '../layout/safeText.js';
+
+/** Longest `<title>`/`<desc>` written, characters (labels: `MAX_LABEL_LENGTH`). */
+const MAX_DESCRIPTION_LENGTH = 2000;
 
 /** Options of {@link renderSvg}. */
 export interface RenderSvgOptions {
@@ -63,8 +67,9 @@ export function renderSvg(scene: Scene, theme: Theme | string = 'column', option
     width: `${w}${t.unit}`, height: `${h}${t.unit}`, viewBox: `0 0 ${w} ${h}`,
     class: `conformark ${scene.kind} theme-${t.name}`, role: 'img', 'aria-labelledby': `${prefix}title ${prefix}desc`,
   });
-  canvas.element('title').attr({ id: `${prefix}title` }).words(scene.title);
-  canvas.element('desc').attr({ id: `${prefix}desc` }).words(scene.desc);
+  // last line of defence for text from files: no XML-invalid or direction-changing characters, bounded length
+  canvas.element('title').attr({ id: `${prefix}title` }).words(safeText(scene.title, MAX_DESCRIPTION_LENGTH).text);
+  canvas.element('desc').attr({ id: `${prefix}desc` }).words(safeText(scene.desc, MAX_DESCRIPTION_LENGTH).text);
   if (t.background !== 'none') canvas.rect(w, h).attr({ class: 'background', x: 0, y: 0, fill: t.background });
   for (const item of scene.items) drawItem(canvas, item, t, round);
   return canvas.svg((node: { attr(name: string, value: null): unknown }) => {
@@ -87,7 +92,7 @@ function drawItem(canvas: ReturnType<typeof sharedCanvas>, item: SceneItem, them
       break;
     case 'text': {
       const weight = item.fontWeight === 'bold' ? { 'font-weight': 'bold' } : {};
-      canvas.plain(item.text).attr({
+      canvas.plain(safeText(item.text, MAX_LABEL_LENGTH).text).attr({
         x: round(item.x), y: round(item.y), 'text-anchor': item.anchor, class: item.role,
         ...(item.atom === undefined ? {} : { 'data-atom': item.atom + 1 }), ...ids(item.atoms),
         ...attrs, 'font-size': round(item.fontSize), ...weight,

@@ -71,7 +71,8 @@ function validator(file: string) {
   const object = (v: unknown, f: string, fields: Record<string, Check>, required: readonly string[] = []) => {
     if (typeof v !== 'object' || v === null || Array.isArray(v)) return fail(f, 'expected an object');
     for (const [key, value] of Object.entries(v)) {
-      const check = fields[key];
+      // own keys only: `__proto__`, `constructor` or `toString` must not find Object.prototype's members
+      const check = Object.hasOwn(fields, key) ? fields[key] : undefined;
       if (!check) fail(`${f}.${key}`, `unknown field (allowed: ${Object.keys(fields).join(', ')})`);
       else check(value, `${f}.${key}`);
     }

@@ -1,5 +1,5 @@
 /** Built-in themes (templates/*.json) and loading a theme by name or path. */
-import { readFileSync } from 'node:fs';
+import { closeSync, openSync, readSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { usageError } from '../model/errors.js';
 import type { SceneMetrics, TextStyle } from '../layout/scene.js';
@@ -20,13 +20,30 @@ export const DEFAULT_THEME: ThemeName = 'column';
 
 const cache = new Map<string, Theme>();
 
+/** Largest theme file read, bytes (a theme is a few KiB; this stops /dev/zero or a wrong huge file). */
+const MAX_THEME_BYTES = 256 * 1024;
+
+/** At most `max + 1` bytes of a file as UTF-8 text, so an endless or huge file is never read in full. */
+function readBounded(path: string, max: number): string {
+  const fd = openSync(path, 'r');
+  try {
+    const buf = Buffer.alloc(max + 1);
+    let got = 0;
+    for (let n = -1; n !== 0 && got < buf.length; got += n) n = readSync(fd, buf, got, buf.length - got, null);
+    return buf.subarray(0, got).toString('utf8');
+  } finally {
+    closeSync(fd);
+  }
+}
+
 function readTheme(path: string, shown: string): Theme {
   let text: string;
   try {
-    text = readFileSync(path, 'utf8');
+    text = readBounded(path, MAX_THEME_BYTES);
   } catch {
     throw usageError('bad-theme', `cannot read the theme file`, shown);
   }
+  if (text.length > MAX_THEME_BYTES) throw usageError('bad-theme', `the theme file is larger than ${MAX_THEME_BYTES / 1024} KiB`, shown);
   let json: unknown;
   try {
     json = JSON.parse(text);

@@ -1,7 +1,7 @@
 /** `conformark inspect FILE`: per-record summary of rings, shapes, positions and torsions; `--json` report. */
 import type { Command } from 'commander';
 import { COUPLING_METHODS, inspectFile, inspectText, jsonText, protectInput, writeAtomic, type CouplingMethod } from '../../index.js';
-import { finiteNumber, oneOf, printWarnings } from '../options.js';
+import { finiteNumber, limitsOf, oneOf, printWarnings } from '../options.js';
 
 interface InspectFlags {
   json?: boolean;
@@ -26,7 +26,8 @@ export function registerInspect(program: Command): void {
     .option('--energy-unit <unit>', 'unit of the energies: kcal/mol, kJ/mol, hartree, eV (default: from the field name)')
     .option('--tolerance <A>', 'bond perception tolerance added to the covalent radii, Å (default 0.40)')
     .option('-o, --output <file>', 'write to FILE instead of standard output')
-    .action(async (file: string, flags: InspectFlags) => {
+    .action(async (file: string, flags: InspectFlags, command: Command) => {
+      const { read, hold } = limitsOf(command);
       if (flags.output) protectInput(file);
       const method = oneOf<CouplingMethod>('--karplus', flags.karplus, COUPLING_METHODS, 'haasnoot-1980');
       const report = await inspectFile(file, {
@@ -34,6 +35,8 @@ export function registerInspect(program: Command): void {
         coupling: { method },
         energy: { field: flags.energyField, unit: flags.energyUnit },
         toleranceA: flags.tolerance === undefined ? undefined : finiteNumber('--tolerance', flags.tolerance, 0, 2),
+        read,
+        hold,
       });
       if (flags.json) for (const r of report.records) printWarnings(r.warnings, `${file}: record ${r.index}`);
       const text = flags.json ? jsonText(report) : inspectText(report);

@@ -22,7 +22,7 @@ import {
   type NewmanHydrogens,
   type NewmanLabels,
 } from '../../index.js';
-import { oneOf, printWarnings, wholeNumber } from '../options.js';
+import { limitsOf, oneOf, printWarnings, wholeNumber } from '../options.js';
 
 interface NewmanFlags {
   bond: string;
@@ -61,9 +61,10 @@ export function registerNewman(program: Command): void {
     .option('--karplus <form>', `coupling equation: ${COUPLING_METHODS.join(', ')} (implies --couplings)`)
     .option('--json', 'print the analysis (conformark/newman@1) instead of a figure')
     .option('-o, --output <file>', 'write to FILE (.svg, .png or .pdf; .json with --json) instead of standard output')
-    .action(async (file: string, flags: NewmanFlags) => {
+    .action(async (file: string, flags: NewmanFlags, command: Command) => {
       if (flags.output) protectInput(file);
-      const { molecule: mol, graph, rings } = prepareRecord(await readRecord(file, wholeNumber('--record', flags.record ?? '1')));
+      const { read } = limitsOf(command);
+      const { molecule: mol, graph, rings } = prepareRecord(await readRecord(file, wholeNumber('--record', flags.record ?? '1'), read));
       const [front, back] = bondSelection(mol, graph, flags.bond);
       const up = flags.up === undefined ? undefined : atomIndex(mol, flags.up);
       const method = oneOf<CouplingMethod>('--karplus', flags.karplus, COUPLING_METHODS, 'haasnoot-1980');
