@@ -40,6 +40,7 @@ export {
 export type { HaasnootParameters, HaasnootSet, HaasnootTerm } from './analysis/haasnoot.js';
 export {
   COUPLING_METHODS,
+  COUPLING_METHOD_NAMES,
   couplingsAcrossBond,
   isSkippedCoupling,
   ringCouplings,
