@@ -130,3 +130,23 @@ export { newmanFigure } from './api/newman.js';
 export type { NewmanFigure, NewmanFigureOptions } from './api/newman.js';
 export { writeFigure, figureFormat, figureBytes, FIGURE_FORMATS } from './api/writeFigure.js';
 export type { FigureFormat, WriteFigureOptions } from './api/writeFigure.js';
+// perceive (area B): bonds from coordinates, rings, selections
+export { perceiveBonds, BOND_TOLERANCE_A, MIN_BOND_LENGTH_A } from './perceive/perceiveBonds.js';
+export type { PerceiveBondsOptions } from './perceive/perceiveBonds.js';
+export { withBonds } from './perceive/withBonds.js';
+export { findRings, canonicalRing } from './perceive/findRings.js';
+export { ringSystems } from './perceive/ringSystems.js';
+export type { RingSystem } from './perceive/ringSystems.js';
+export { atomIndex } from './perceive/atomIndex.js';
+export { bondSelection, bondListSelection } from './perceive/bondSelection.js';
+export { ringSelection } from './perceive/ringSelection.js';
+// shared record preparation (integrator)
+export { prepareRecord, readRecord } from './api/prepare.js';
+export type { PreparedRecord } from './api/prepare.js';
+// inspect (integrator)
+export { inspectFile, inspectMolecule } from './api/inspect.js';
+export type { InspectOptions, InspectReport } from './api/inspect.js';
+export { inspectText } from './api/inspectText.js';
+export { jsonText } from './api/jsonText.js';
+export { recordReport } from './analysis/recordReport.js';
+export type { RecordReport, RecordReportOptions } from './analysis/recordReport.js';

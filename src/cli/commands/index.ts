@@ -1,10 +1,14 @@
 /** Registry of subcommands: name → function that adds it to the program. One file per command. */
 import type { Command } from 'commander';
 import { registerBuild } from './build.js';
+import { registerInspect } from './inspect.js';
+import { registerNewman } from './newman.js';
 
 export type RegisterCommand = (program: Command) => void;
 
 export const COMMANDS = new Map<string, RegisterCommand>([
   // each command file adds one entry here, e.g. ['inspect', registerInspect]
+  ['inspect', registerInspect],
+  ['newman', registerNewman],
   ['build', registerBuild],
 ]);

@@ -3,15 +3,13 @@ import type { Command } from 'commander';
 import {
   atomIndex,
   bondSelection,
-  buildGraph,
-  findRings,
   newmanFigure,
   newmanView,
+  prepareRecord,
   protectInput,
-  readRecords,
+  readRecord,
   toNewmanJson,
   usageError,
-  withBonds,
   writeAtomic,
   writeFigure,
   type Molecule,
@@ -19,6 +17,7 @@ import {
   type NewmanHydrogens,
   type NewmanLabels,
 } from '../../index.js';
+import { oneOf, printWarnings, wholeNumber } from '../options.js';
 
 interface NewmanFlags {
   bond: string;
@@ -55,14 +54,12 @@ export function registerNewman(program: Command): void {
     .option('-o, --output <file>', 'write to FILE (.svg, .png or .pdf; .json with --json) instead of standard output')
     .action(async (file: string, flags: NewmanFlags) => {
       if (flags.output) protectInput(file);
-      const mol = withBonds(await pickRecord(file, positive('--record', flags.record ?? '1')));
-      const graph = buildGraph(mol.atoms.length, mol.bonds ?? []);
-      const rings = findRings(graph);
+      const { molecule: mol, graph, rings } = prepareRecord(await readRecord(file, wholeNumber('--record', flags.record ?? '1')));
       const [front, back] = bondSelection(mol, graph, flags.bond);
       const up = flags.up === undefined ? undefined : atomIndex(mol, flags.up);
       if (flags.json) {
         const view = newmanView(mol, graph, front, back, { up, rings });
-        for (const w of view.warnings) process.stderr.write(`conformark: warning: ${w.message}\n`);
+        printWarnings(view.warnings);
         const text = `${JSON.stringify(toNewmanJson(view, mol), null, 2)}\n`;
         if (flags.output) writeAtomic(flags.output, text);
         else process.stdout.write(text);
@@ -78,31 +75,10 @@ export function registerNewman(program: Command): void {
         theme: flags.theme,
         idPrefix: flags.idPrefix,
       });
-      for (const w of warnings) process.stderr.write(`conformark: warning: ${w.message}\n`);
+      printWarnings(warnings);
       if (flags.output) await writeFigure(flags.output, svg);
       else process.stdout.write(`${svg}\n`);
     });
-}
-
-/** Record `n` (from 1) of the file, read lazily so a long trajectory is not parsed past it. */
-async function pickRecord(file: string, n: number): Promise<Molecule> {
-  let count = 0;
-  for await (const mol of readRecords(file)) {
-    if (++count === n) return mol;
-  }
-  throw usageError('no-record', `record ${n} does not exist (the file has ${count} record${count === 1 ? '' : 's'})`, file);
-}
-
-function positive(flag: string, text: string): number {
-  const value = Number(text);
-  if (text.trim() === '' || !Number.isInteger(value) || value < 1) throw usageError('bad-option', `${flag} expects a whole number from 1, got "${text}"`);
-  return value;
-}
-
-function oneOf<T extends string>(flag: string, text: string | undefined, words: readonly T[], fallback: T): T {
-  if (text === undefined) return fallback;
-  if ((words as readonly string[]).includes(text)) return text as T;
-  throw usageError('bad-option', `${flag} expects one of ${words.join(', ')}, got "${text}"`);
 }
 
 function markPair(mol: Molecule, pair: string): [number, number] {

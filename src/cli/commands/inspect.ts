@@ -1,0 +1,43 @@
+/** `conformark inspect FILE`: per-record summary of rings, shapes, positions and torsions; `--json` report. */
+import type { Command } from 'commander';
+import { COUPLING_METHODS, inspectFile, inspectText, jsonText, protectInput, writeAtomic, type CouplingMethod } from '../../index.js';
+import { finiteNumber, oneOf, printWarnings } from '../options.js';
+
+interface InspectFlags {
+  json?: boolean;
+  couplings?: boolean;
+  karplus?: string;
+  energyField?: string;
+  energyUnit?: string;
+  tolerance?: string;
+  output?: string;
+}
+
+/** Adds the `inspect` command to the program. */
+export function registerInspect(program: Command): void {
+  program
+    .command('inspect')
+    .description('summarise every record: rings with shape, descriptor and Q/θ/φ, substituent positions, ring torsions')
+    .argument('<file>', 'coordinate file (XYZ, SDF/molfile, PDB; .gz read transparently; - for standard input)')
+    .option('--json', 'print the full report (conformark/report@1)')
+    .option('--couplings', 'add predicted ³J(H,H) for every ring H–C–C–H')
+    .option('--karplus <form>', `coupling equation: ${COUPLING_METHODS.join(', ')} (default haasnoot-1980)`)
+    .option('--energy-field <name>', 'SD field or XYZ key holding the energy (default: the first whose name contains "energy")')
+    .option('--energy-unit <unit>', 'unit of the energies: kcal/mol, kJ/mol, hartree, eV (default: from the field name)')
+    .option('--tolerance <A>', 'bond perception tolerance added to the covalent radii, Å (default 0.40)')
+    .option('-o, --output <file>', 'write to FILE instead of standard output')
+    .action(async (file: string, flags: InspectFlags) => {
+      if (flags.output) protectInput(file);
+      const method = oneOf<CouplingMethod>('--karplus', flags.karplus, COUPLING_METHODS, 'haasnoot-1980');
+      const report = await inspectFile(file, {
+        couplings: flags.couplings === true || flags.karplus !== undefined,
+        coupling: { method },
+        energy: { field: flags.energyField, unit: flags.energyUnit },
+        toleranceA: flags.tolerance === undefined ? undefined : finiteNumber('--tolerance', flags.tolerance, 0, 2),
+      });
+      if (flags.json) for (const r of report.records) printWarnings(r.warnings, `${file}: record ${r.index}`);
+      const text = flags.json ? jsonText(report) : inspectText(report);
+      if (flags.output) writeAtomic(flags.output, text);
+      else process.stdout.write(text);
+    });
+}
