@@ -3,10 +3,12 @@
  * ring's own frame: opposite ring bonds parallel (centre of inversion), axial bonds along n and so vertical,
  * equatorial bonds exactly parallel to the ring bonds once removed (exact in the tetrahedral model [D]).
  *
+ * The drawn displacement is stretched 1.4 times along n (DEPTH), which keeps every rule above.
+ *
  * Placement from the measured ring, never typed in: ring atom j goes to an "up" vertex when its Cremer–Pople
  * displacement z_j > 0, else to a "down" vertex; the numbering keeps its clockwise-from-+n sense on screen (the
  * view is a proper rotation); the template is turned about n (never mirrored) so that reference atom 2 (C1 of a
- * pyranose) is the right-hand tip. Each substituent takes the slot its measured position names (axial or
+ * pyranose) is (nearly) the right-hand tip. Each substituent takes the slot its measured position names (axial or
  * equatorial), an axial bond pointing to its measured face (top = up).
  */
 import type { Molecule, Vec3 } from '../model/molecule.js';
@@ -14,12 +16,12 @@ import { usageError } from '../model/errors.js';
 import { add, scale, sub, unit, dot, RAD } from '../geometry/vec3.js';
 import type { RingAnalysis } from '../analysis/ringAnalysis.js';
 import type { RingSubstituent } from '../analysis/substituents.js';
-import { projectPoint, ringViewFrame, type ViewPoint } from './ringView.js';
-import { DEFAULT_ELEVATION_DEG, type PlacedBond, type RingHydrogens, type RingPlacement } from './ringPlacement.js';
+import { checkElevation, projectPoint, ringViewFrame, type ViewPoint } from './ringView.js';
+import { type PlacedBond, type RingHydrogens, type RingPlacement } from './ringPlacement.js';
 
 /** Options of {@link chairTemplate}. */
 export interface ChairTemplateOptions {
-  /** Viewer elevation above the mean plane, degrees. Default 20. */
+  /** Viewer elevation above the mean plane, degrees. Default 16. */
   readonly elevationDeg?: number;
   /** Draw hydrogens on ring atoms. Default `show`. */
   readonly hydrogens?: RingHydrogens;
@@ -27,6 +29,18 @@ export interface ChairTemplateOptions {
 
 /** Ideal ring bond (Å) of the template; a tetrahedral chair has z = ±b/6 and projected radius b·2√2/3 [D]. */
 const BOND = 1.54;
+/**
+ * Up/down displacement drawn 1.4 times the tetrahedral value, so the zig-zag reads at a glance; a stretch along
+ * n keeps every parallel (and the axial bonds vertical) [common practice, no source].
+ */
+const DEPTH = 1.4;
+/** Default elevation of the template, degrees: with DEPTH, both tips read as a peak and a trough. */
+export const TEMPLATE_ELEVATION_DEG = 16;
+/**
+ * Turn of the template about n, degrees: at 0 the back and front atoms of each side share a column and their
+ * axial bonds overlap; −15 separates them and keeps reference atom 2 the right-hand tip [common practice, no source].
+ */
+const TURN_DEG = -15;
 const HEAVY_LENGTH = 0.9 * BOND;
 const H_LENGTH = 0.75 * BOND;
 
@@ -50,7 +64,8 @@ export function assertChair(ring: RingAnalysis): void {
  */
 export function chairTemplate(ring: RingAnalysis, mol: Pick<Molecule, 'atoms'>, options: ChairTemplateOptions = {}): RingPlacement {
   assertChair(ring);
-  const { elevationDeg = DEFAULT_ELEVATION_DEG, hydrogens = 'show' } = options;
+  const { elevationDeg = TEMPLATE_ELEVATION_DEG, hydrogens = 'show' } = options;
+  checkElevation(elevationDeg);
   // 1. Frame of the template: n = +z, h = +y; the right vector then fixes where atom index 1 goes.
   const n: Vec3 = [0, 0, 1];
   const frame = ringViewFrame([0, 0, 0], n, [0, 1, 0], elevationDeg)!;
@@ -58,9 +73,9 @@ export function chairTemplate(ring: RingAnalysis, mol: Pick<Molecule, 'atoms'>, 
   // 2. Ideal vertices, clockwise seen from +z (angle decreasing), up/down from the measured z_j.
   const s = ring.z[0]! >= 0 ? 1 : -1;
   const radius = (BOND * 2 * Math.SQRT2) / 3;
-  const lift = BOND / 6;
+  const lift = (BOND / 6) * DEPTH;
   const vertex: Vec3[] = ring.atoms.map((_, j) => {
-    const a = rightAngle + (1 - j) * 60 * RAD;
+    const a = rightAngle + (TURN_DEG + (1 - j) * 60) * RAD;
     return [radius * Math.cos(a), radius * Math.sin(a), s * (j % 2 === 0 ? lift : -lift)];
   });
   const points = new Map<number, ViewPoint>();

@@ -9,7 +9,7 @@ import type { Molecule } from '../model/molecule.js';
 import type { Graph } from '../perceive/graph.js';
 import type { RingAnalysis } from '../analysis/ringAnalysis.js';
 import { firstFree, grow, type Box, type Obstacles, type Segment } from './labelPlacement.js';
-import { boxAt, rayCandidates, textBox, type TextBox } from './newmanLabels.js';
+import { boxAt, textBox, type TextBox } from './newmanLabels.js';
 import { approximateMeasure, DEFAULT_METRICS, textStyle, type Scene, type SceneItem, type SceneLine, type SceneMetrics, type TextMeasure, type TextStyle } from './scene.js';
 import { ringCaption, ringDescription, ringTitle, type CaptionRun } from './ringCaption.js';
 import { ringAtomLabel, ringVertexLabel, substituentLabel, type RingLabels } from './ringLabels.js';
@@ -108,7 +108,7 @@ export function layoutRing(placement: RingPlacement, ring: RingAnalysis, mol: Mo
     const t = textBox(text, labelStyle, measure);
     const [p, q] = [at(from), at(atom)];
     const len = Math.hypot(q.x - p.x, q.y - p.y);
-    const candidates = rayCandidates(p.x, p.y, AZ(q.x - p.x, q.y - p.y), len + metrics.gap + metrics.lineWidth / 2, t, step);
+    const candidates = aroundCandidates(p.x, p.y, AZ(q.x - p.x, q.y - p.y), len + metrics.gap + metrics.lineWidth / 2, t, step, 45);
     addText('atom-label', text, candidates[firstFree(candidates, obstacles, clearance)]!, t, labelStyle, atom);
   }
 
@@ -173,12 +173,16 @@ function crossing(a: Segment, b: Segment): number | null {
   return t > 0.02 && t < 0.98 && u > 0.02 && u < 0.98 ? t : null;
 }
 
-/** Candidate boxes all round a point, best first: the preferred azimuth, then turning away from it. */
-function aroundCandidates(x: number, y: number, azDeg: number, from: number, t: TextBox, step: number): Box[] {
+/**
+ * Candidate boxes round a point at distance `from` and beyond, best first: the preferred azimuth, then turning
+ * away from it by up to `maxDevDeg`, then farther out.
+ */
+function aroundCandidates(x: number, y: number, azDeg: number, from: number, t: TextBox, step: number, maxDevDeg = 180): Box[] {
   const scored: { cost: number; box: Box }[] = [];
-  for (let r = 0; r <= 12; r++) {
-    for (let dev = 0; dev <= 180; dev += 15) {
+  for (let r = 0; r <= 16; r++) {
+    for (let dev = 0; dev <= maxDevDeg; dev += 15) {
       for (const sign of dev === 0 || dev === 180 ? [1] : [1, -1]) {
+
         const a = ((azDeg + sign * dev) * Math.PI) / 180;
         const [ux, uy] = [Math.sin(a), -Math.cos(a)];
         const reach = Math.min(Math.abs(ux) < 1e-12 ? Infinity : t.width / 2 / Math.abs(ux), Math.abs(uy) < 1e-12 ? Infinity : t.height / 2 / Math.abs(uy));

@@ -7,7 +7,7 @@ import { atomPosition, type Molecule } from '../model/molecule.js';
 import { usageError } from '../model/errors.js';
 import { add, distance, scale, sub } from '../geometry/vec3.js';
 import type { RingAnalysis } from '../analysis/ringAnalysis.js';
-import { projectPoint, ringViewFrame, type ViewPoint } from './ringView.js';
+import { checkElevation, projectPoint, ringViewFrame, type ViewPoint } from './ringView.js';
 import { DEFAULT_ELEVATION_DEG, type PlacedBond, type RingHydrogens, type RingPlacement } from './ringPlacement.js';
 
 /** Options of {@link ringProjection}. */
@@ -24,9 +24,7 @@ export interface RingProjectionOptions {
  */
 export function ringProjection(ring: RingAnalysis, mol: Pick<Molecule, 'atoms' | 'coords'>, options: RingProjectionOptions = {}): RingPlacement {
   const { elevationDeg = DEFAULT_ELEVATION_DEG, hydrogens = 'show' } = options;
-  if (!Number.isFinite(elevationDeg) || elevationDeg < -90 || elevationDeg > 90) {
-    throw usageError('bad-option', `elevation must be a number of degrees from -90 to 90, got ${elevationDeg}`);
-  }
+  checkElevation(elevationDeg);
   const pos = (a: number) => atomPosition(mol, a);
   const [a1, a2] = [ring.atoms[0]!, ring.atoms[1]!];
   const mid = scale(add(pos(a1), pos(a2)), 0.5);

@@ -5,6 +5,7 @@
  * so the ring reads clockwise on screen exactly when it reads clockwise from +n.
  */
 import type { Vec3 } from '../model/molecule.js';
+import { usageError } from '../model/errors.js';
 import { cross, dot, scale, sub, unit, add, RAD } from '../geometry/vec3.js';
 
 /** Orthonormal viewing frame about a ring centre. */
@@ -52,4 +53,12 @@ export function shoelaceArea(points: readonly { readonly x: number; readonly y: 
     s += p.x * q.y - q.x * p.y;
   });
   return s / 2;
+}
+
+/** The elevation as given, or a clear error when it is not a number of degrees in [−90, 90]. */
+export function checkElevation(elevationDeg: number): number {
+  if (!Number.isFinite(elevationDeg) || elevationDeg < -90 || elevationDeg > 90) {
+    throw usageError('bad-option', `elevation must be a number of degrees from -90 to 90, got ${elevationDeg}`);
+  }
+  return elevationDeg;
 }
