@@ -62,7 +62,8 @@ export {
   convertEnergy,
   ensembleAverage,
 } from './analysis/boltzmann.js';
-export type { BoltzmannOptions, BoltzmannResult, EnergyUnit } from './analysis/boltzmann.js';
+export type { BoltzmannOptions, BoltzmannResult } from './analysis/boltzmann.js';
+export type { EnergyUnit } from './model/energyUnits.js';
 export { superpose, applyMat3 } from './analysis/superpose.js';
 export type { Mat3, Superposition } from './analysis/superpose.js';
 export { heavyAtomRmsd } from './analysis/rmsd.js';
@@ -150,6 +151,22 @@ export { inspectText } from './api/inspectText.js';
 export { jsonText } from './api/jsonText.js';
 export { recordReport } from './analysis/recordReport.js';
 export type { RecordReport, RecordReportOptions } from './analysis/recordReport.js';
+// io (area A): readers, format detection, energies, XYZ writer
+export { parseText, parseTextSettled } from './io/parseText.js';
+export type { ParseTextOptions } from './io/parseText.js';
+export { readRecords, readRecordsSettled } from './io/readRecords.js';
+export type { StreamOptions } from './io/readRecords.js';
+export { readFrames } from './io/readFrames.js';
+export type { Frame, FrameOptions } from './io/readFrames.js';
+export type { Settled } from './io/sink.js';
+export type { ReadOptions } from './io/limits.js';
+export { DEFAULT_LIMITS } from './io/limits.js';
+export { detectFormat, formatFromExtension } from './io/detectFormat.js';
+export { findEnergy, toKcalPerMol, normalizeEnergyUnit } from './io/energy.js';
+export type { Energy, EnergyOptions, FoundEnergy } from './io/energy.js';
+export { formatXyz } from './io/formatXyz.js';
+export type { FormatXyzOptions } from './io/formatXyz.js';
+export { parseXyzComment } from './io/xyzComment.js';
 // chair (area G): chair template and projected ring figures
 export { ringViewFrame, projectPoint, shoelaceArea, checkElevation } from './layout/ringView.js';
 export type { RingViewFrame, ViewPoint } from './layout/ringView.js';

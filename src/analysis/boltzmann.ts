@@ -5,36 +5,14 @@
  * from electronic energies or enthalpies ignore entropy differences (the caller says so in its output).
  */
 import { usageError } from '../model/errors.js';
+import { convertEnergy, type EnergyUnit } from '../model/energyUnits.js';
+
+export { ENERGY_UNITS, convertEnergy, type EnergyUnit } from '../model/energyUnits.js';
 
 /** Gas constant, kJ mol⁻¹ K⁻¹ (CODATA, exact since 2019 — from memory). */
 export const GAS_CONSTANT_KJ = 8.314462618e-3;
 /** Gas constant, kcal mol⁻¹ K⁻¹ (= GAS_CONSTANT_KJ / 4.184, thermochemical calorie). */
 export const GAS_CONSTANT_KCAL = 1.987204259e-3;
-
-/** Energy units and their size in kcal/mol. */
-export const ENERGY_UNITS = new Map([
-  ['kcal/mol', { kcalPerMol: 1, source: 'definition' }],
-  ['kJ/mol', { kcalPerMol: 1 / 4.184, source: '1 kcal = 4.184 kJ (thermochemical calorie)' }],
-  ['hartree', { kcalPerMol: 627.509474, source: 'CODATA hartree–kcal/mol factor, from memory' }],
-  ['eV', { kcalPerMol: 23.060548, source: '96.4853 kJ/mol per eV / 4.184, from memory' }],
-] as const);
-
-/** Names of the accepted energy units. */
-export type EnergyUnit = typeof ENERGY_UNITS extends Map<infer K, unknown> ? K : never;
-
-function unitSize(unit: string): number {
-  const u = ENERGY_UNITS.get(unit as EnergyUnit);
-  if (!u) throw usageError('bad-energy-unit', `unknown energy unit "${unit}"; use ${[...ENERGY_UNITS.keys()].join(', ')}`);
-  return u.kcalPerMol;
-}
-
-/**
- * Converts an energy between units.
- * @example convertEnergy(1, 'hartree', 'kcal/mol') // 627.509474
- */
-export function convertEnergy(value: number, from: EnergyUnit, to: EnergyUnit): number {
-  return (value * unitSize(from)) / unitSize(to);
-}
 
 /** Options for `boltzmannPopulations`. */
 export interface BoltzmannOptions {
@@ -70,7 +48,7 @@ export function boltzmannPopulations(energies: readonly number[], options: Boltz
   if (!(Number.isFinite(temperatureK) && temperatureK > 0)) {
     throw usageError('bad-temperature', `temperature must be a positive number of kelvin, got ${temperatureK}`);
   }
-  const rt = (GAS_CONSTANT_KCAL * temperatureK) / unitSize(unit);
+  const rt = convertEnergy(GAS_CONSTANT_KCAL * temperatureK, 'kcal/mol', unit);
   const bad = energies.findIndex((e) => !Number.isFinite(e));
   if (bad >= 0) throw usageError('bad-energy', `energy ${bad + 1} is not a finite number`);
   const g = degeneracies ?? energies.map(() => 1);

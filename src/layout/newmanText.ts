@@ -38,3 +38,17 @@ export function newmanDescription(view: NewmanView, mol: Molecule, marks: readon
   ];
   return parts.join(' ');
 }
+
+/** Lines `³J(H7,H12) 12.8 Hz (−176°)` for each predicted coupling, in the order given, plus the method. */
+export function couplingLines(
+  view: NewmanView,
+  mol: Molecule,
+  couplings: readonly { front: number; back: number; jHz: number; method: string }[],
+): string[] {
+  if (couplings.length === 0) return [];
+  const lines = couplings.map((c) => {
+    const p = view.pairs.find((q) => q.front === c.front && q.back === c.back);
+    return `³J(${id(mol, c.front)},${id(mol, c.back)}) ${c.jHz.toFixed(1)} Hz (${torsionText(p?.torsionDeg ?? null)})`;
+  });
+  return [...lines, `predicted with ${couplings[0]!.method} (estimates)`];
+}

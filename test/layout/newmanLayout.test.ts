@@ -82,7 +82,7 @@ describe('layoutNewman', () => {
 
   it('layoutNewman marks the heaviest pair by default, the requested pairs, or none', () => {
     const s = scene(butane(180), 1, 2);
-    expect(s.items.filter((i) => i.role === 'torsion-arc').map((i) => i.atoms)).toEqual([[0, 1, 2, 3]]);
+    expect(s.items.filter((i) => i.role === 'torsion-arc').map((i) => ('atoms' in i ? i.atoms : undefined))).toEqual([[0, 1, 2, 3]]);
     const two = scene(butane(180), 1, 2, { mark: [[0, 3], [7, 9]] });
     expect(texts(two, 'torsion-label').map((t) => t.text)).toEqual(['180°', '+60°']);
     expect(scene(butane(180), 1, 2, { mark: [] }).items.some((i) => i.role === 'torsion-arc')).toBe(false);

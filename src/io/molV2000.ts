@@ -1,0 +1,137 @@
+/**
+ * The fixed-column lines of an MDL V2000 connection table: counts line, atom lines, bond lines, `M  CHG`.
+ * Columns follow the CTfile format (BIOVIA, "CTfile Formats", 2020); whitespace-separated fields are accepted
+ * as a fallback because many writers misalign the atom block.
+ */
+import { elementInfo } from '../model/elements.js';
+import { fields, parseNumber, scanCount, scanFloat } from './numbers.js';
+import { quote } from './sink.js';
+
+/** Counts line: atom and bond counts, and the version tag. */
+export interface Counts {
+  readonly atoms: number;
+  readonly bonds: number;
+  readonly v3000: boolean;
+}
+
+/** Parses a counts line, or returns an error message. */
+export function parseCounts(line: string): Counts | string {
+  if (/V3000/.test(line)) return { atoms: 0, bonds: 0, v3000: true };
+  const atoms = columnInt(line, 0, 3);
+  const bonds = columnInt(line, 3, 6);
+  if (atoms < 0 || bonds < 0) return `expected a counts line (atoms, bonds, ..., V2000), found ${quote(line)}`;
+  return { atoms, bonds, v3000: false };
+}
+
+/** One parsed V2000 atom line. */
+export interface V2000Atom {
+  readonly element: string;
+  readonly x: number;
+  readonly y: number;
+  readonly z: number;
+  readonly charge: number;
+}
+
+const CHARGE_CODES: readonly number[] = [0, 3, 2, 1, 0, -1, -2, -3];
+
+/** Parses an atom line, or returns `{ code, message }`. Fixed columns are scanned in place (hot path). */
+export function parseV2000Atom(line: string): V2000Atom | { code: string; message: string } {
+  const fixed = line.length >= 34 && line.charCodeAt(30) === 32;
+  let x = fixed ? columnFloat(line, 0, 10) : Number.NaN;
+  let y = fixed ? columnFloat(line, 10, 20) : Number.NaN;
+  let z = fixed ? columnFloat(line, 20, 30) : Number.NaN;
+  let symbol = fixed ? columnText(line, 31, 34) : '';
+  let chargeCode = fixed ? columnInt(line, 36, 39, 0) : 0;
+  if (Number.isNaN(x) || Number.isNaN(y) || Number.isNaN(z) || symbol === '') {
+    const f = fields(line);
+    if (f.length < 4) return { code: 'bad-atom-line', message: `expected x y z and an element, found ${quote(line)}` };
+    [x, y, z] = [parseNumber(f[0]!), parseNumber(f[1]!), parseNumber(f[2]!)];
+    symbol = f[3]!;
+    chargeCode = f[5] === undefined ? 0 : Number(f[5]);
+  }
+  if (!Number.isFinite(x) || !Number.isFinite(y) || !Number.isFinite(z)) {
+    const bad = [x, y, z].findIndex((v) => !Number.isFinite(v));
+    const text = fields(line)[bad] ?? '';
+    const what = Number.isNaN([x, y, z][bad]) ? 'is not a number' : 'is not finite';
+    return { code: 'bad-number', message: `${'xyz'[bad]} coordinate ${quote(text)} ${what}` };
+  }
+  const element = symbolOf(symbol);
+  if (!element) return { code: 'unknown-element', message: `unknown element ${quote(symbol)}` };
+  return { element, x, y, z, charge: CHARGE_CODES[chargeCode] ?? 0 };
+}
+
+const symbols = new Map<string, string | null>();
+
+/** Molfile element symbol → normalised symbol (cached), `null` when unknown (`R#`, `A`, `*`). */
+function symbolOf(text: string): string | null {
+  let hit = symbols.get(text);
+  if (hit === undefined) {
+    hit = elementInfo(text)?.symbol ?? null;
+    if (symbols.size < 1000) symbols.set(text, hit);
+  }
+  return hit;
+}
+
+/** Bounds of the non-blank text in columns [from, to). */
+function trimmed(line: string, from: number, to: number): [number, number] {
+  let s = from;
+  let e = Math.min(to, line.length);
+  while (s < e && line.charCodeAt(s) === 32) s++;
+  while (e > s && line.charCodeAt(e - 1) === 32) e--;
+  return [s, e];
+}
+
+function columnFloat(line: string, from: number, to: number): number {
+  const [s, e] = trimmed(line, from, to);
+  return s < e ? scanFloat(line, s, e) : Number.NaN;
+}
+
+function columnText(line: string, from: number, to: number): string {
+  const [s, e] = trimmed(line, from, to);
+  return line.slice(s, e);
+}
+
+/** Integer in fixed columns [from, to); `blank` if empty, -1 if not a non-negative integer. */
+function columnInt(line: string, from: number, to: number, blank = -1): number {
+  const [s, e] = trimmed(line, from, to);
+  return s < e ? scanCount(line, s, e) : blank;
+}
+
+/** One parsed bond line (1-based atom numbers as in the file). */
+export interface V2000Bond {
+  readonly a: number;
+  readonly b: number;
+  readonly order: number;
+}
+
+/** Parses a bond line, or returns an error message. */
+export function parseV2000Bond(line: string): V2000Bond | string {
+  let a = columnInt(line, 0, 3);
+  let b = columnInt(line, 3, 6);
+  let type = columnInt(line, 6, 9);
+  if (a < 0 || b < 0 || type < 0) {
+    const f = fields(line);
+    [a, b, type] = [f[0], f[1], f[2]].map((t) => (t !== undefined && /^\d+$/.test(t) ? Number(t) : -1)) as [number, number, number];
+    if (a < 0 || b < 0 || type < 0) return `expected a bond line (atom, atom, type), found ${quote(line)}`;
+  }
+  return { a, b, order: bondOrder(type) };
+}
+
+/** Molfile bond type → order: 1, 2, 3, 4 (aromatic); query and special types count as 1. */
+export function bondOrder(type: number): number {
+  return type >= 1 && type <= 4 ? type : 1;
+}
+
+/** `M  CHG  n aaa vvv ...` → [atom (1-based), charge] pairs, or an error message. */
+export function parseChargeLine(line: string): Array<[number, number]> | string {
+  const f = fields(line.slice(6));
+  const n = Number(f[0]);
+  const pairs: Array<[number, number]> = [];
+  for (let k = 0; k < n; k++) {
+    const atom = Number(f[1 + 2 * k]);
+    const charge = Number(f[2 + 2 * k]);
+    if (!Number.isInteger(atom) || !Number.isInteger(charge)) return `malformed charge line ${quote(line)}`;
+    pairs.push([atom, charge]);
+  }
+  return Number.isInteger(n) ? pairs : `malformed charge line ${quote(line)}`;
+}

@@ -1,0 +1,132 @@
+/**
+ * Streaming reader: a file, `-` (standard input) or a `.gz` file → an async stream of records, read in
+ * chunks of about 1 MiB and split into lines by hand, so a large file is never held in memory.
+ */
+import { ParseError } from '../model/errors.js';
+import type { FormatName, Molecule } from '../model/molecule.js';
+import { detectFormat, SNIFF_LINES } from './detectFormat.js';
+import { emptyInputIssue } from './emptyInput.js';
+import { FORMATS, type ConsumerExtras } from './formats.js';
+import { resolveLimits, type ReadLimits, type ReadOptions } from './limits.js';
+import { LineSplitter } from './lines.js';
+import { openInput } from './openInput.js';
+import { scanConect } from './scanConect.js';
+import type { Settled } from './sink.js';
+
+/** Options of the streaming readers. */
+export interface StreamOptions extends ReadOptions {
+  /**
+   * Called with each bad record's error; reading then goes on with the next record. Without it the first
+   * bad record throws. Problems that stop reading altogether (binary data, an over-long line) always throw.
+   */
+  readonly onError?: (error: ParseError) => void;
+}
+
+/** Internal knobs for `readFrames`. */
+export interface StreamExtras {
+  /** Coordinate buffers the caller is done with; XYZ frames of the same size reuse them. */
+  readonly pool?: Float64Array[];
+}
+
+/**
+ * Yields each record's outcome, continuing after a bad record where the format allows (XYZ at the next
+ * count line, SDF after `$$$$`, PDB at the next MODEL). A fatal problem is yielded last.
+ * @example for await (const r of readRecordsSettled('big.sdf.gz')) if (!r.ok) console.error(r.error.message)
+ */
+export async function* readRecordsSettled(path: string, options: ReadOptions = {}): AsyncGenerator<Settled> {
+  for await (const batch of settledBatches(path, options)) yield* batch;
+}
+
+/**
+ * The engine behind the streaming readers: outcomes in batches (one per input chunk, so the per-record
+ * cost of async iteration is paid once per chunk). A yielded array is not reused.
+ */
+export async function* settledBatches(
+  path: string,
+  options: ReadOptions = {},
+  extras: StreamExtras = {},
+): AsyncGenerator<Settled[]> {
+  const limits = resolveLimits(options);
+  const chunks = openInput(path);
+  const queue: Settled[] = [];
+  let fatal = false;
+  let count = 0;
+  let blank = true;
+  const emit = (r: Settled): void => {
+    queue.push(r);
+    if (!r.ok && r.fatal) fatal = true;
+  };
+  const splitter = new LineSplitter(path, limits.maxLineLength);
+  try {
+    const head = await readHead(chunks, splitter);
+    const format = options.format ?? detectFormat(path, head.lines.slice(0, SNIFF_LINES).join('\n'));
+    const consumer = FORMATS.get(format)!.consumer(path, limits, emit, await consumerExtras(path, format, limits, extras));
+    let batch = head.lines;
+    let first = 1;
+    for (let done = head.done; ; ) {
+      for (let k = 0; k < batch.length && !fatal; k++) {
+        const line = batch[k]!;
+        if (blank && line.trim() !== '') blank = false;
+        consumer.feed(line, first + k);
+      }
+      if (queue.length > 0 && !fatal) {
+        count += queue.length;
+        yield queue.splice(0);
+      }
+      if (fatal || done) break;
+      first = splitter.lastLine + 1;
+      const next = await chunks.next();
+      if (next.done) {
+        batch = splitter.end();
+        done = true;
+      } else batch = splitter.pushBytes(next.value);
+    }
+    if (!fatal) consumer.end(splitter.lastLine);
+  } catch (err) {
+    if (!(err instanceof ParseError)) throw err;
+    emit({ ok: false, error: err, fatal: true });
+  } finally {
+    await chunks.return(undefined);
+  }
+  count += queue.length;
+  if (queue.length > 0) yield queue.splice(0);
+  if (count === 0) yield [{ ok: false, error: new ParseError(emptyInputIssue(path, blank)), fatal: true }];
+}
+
+/**
+ * Yields the records of `path` (`-` = standard input; gzip transparent; format from the extension or the
+ * content). Throws `ParseError` at the first bad record unless `options.onError` is given.
+ * @example for await (const mol of readRecords('conformers.sdf')) console.log(mol.title)
+ */
+export async function* readRecords(path: string, options: StreamOptions = {}): AsyncGenerator<Molecule> {
+  for await (const batch of settledBatches(path, options)) {
+    for (const r of batch) {
+      if (r.ok) yield r.molecule;
+      else if (r.fatal || !options.onError) throw r.error;
+      else options.onError(r.error);
+    }
+  }
+}
+
+/** Reads chunks until at least `SNIFF_LINES` lines (or the end) are there, for format detection. */
+async function readHead(
+  chunks: AsyncGenerator<Uint8Array>,
+  splitter: LineSplitter,
+): Promise<{ lines: string[]; done: boolean }> {
+  const lines: string[] = [];
+  while (lines.length < SNIFF_LINES) {
+    const next = await chunks.next();
+    if (next.done) {
+      lines.push(...splitter.end());
+      return { lines, done: true };
+    }
+    for (const l of splitter.pushBytes(next.value)) lines.push(l);
+  }
+  return { lines, done: false };
+}
+
+/** PDB files (not standard input) get their CONECT records scanned first, so models can be streamed. */
+async function consumerExtras(path: string, format: FormatName, limits: ReadLimits, extras: StreamExtras): Promise<ConsumerExtras> {
+  if (format !== 'pdb' || path === '-') return { pool: extras.pool };
+  return { pool: extras.pool, conect: await scanConect(path, limits) };
+}
