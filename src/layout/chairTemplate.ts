@@ -43,6 +43,8 @@ export const TEMPLATE_ELEVATION_DEG = 16;
 const TURN_DEG = -15;
 const HEAVY_LENGTH = 0.9 * BOND;
 const H_LENGTH = 0.75 * BOND;
+/** Smallest on-screen length of a substituent bond, as a fraction of its template length. */
+const MIN_SCREEN = 0.8;
 
 /** `ring 1`, or the 1-based atom list when the ring has no id. */
 export function ringName(ring: Pick<RingAnalysis, 'id' | 'atoms'>): string {
@@ -94,7 +96,12 @@ export function chairTemplate(ring: RingAnalysis, mol: Pick<Molecule, 'atoms'>, 
       const slot = slots.get(x.atom)!;
       const dir = slot === 'axial' ? axialDir(x.face) : slot === 'equatorial' ? eq : unit(vertex[j]!)!;
       const length = mol.atoms[x.atom]!.element === 'H' ? H_LENGTH : HEAVY_LENGTH;
-      points.set(x.atom, projectPoint(frame, add(vertex[j]!, scale(dir, length))));
+      // a bond pointing at the viewer looks short: lengthen it (same direction) to a readable screen length
+      const tip = projectPoint(frame, add(vertex[j]!, dir));
+      const base = points.get(atom)!;
+      const onScreen = Math.hypot(tip.x - base.x, tip.y - base.y);
+      const drawnLength = Math.max(length, (MIN_SCREEN * length) / Math.max(onScreen, 0.2));
+      points.set(x.atom, projectPoint(frame, add(vertex[j]!, scale(dir, drawnLength))));
       bonds.push({ atoms: [atom, x.atom], role: x.position ?? 'substituent-bond' });
     }
   });

@@ -12,10 +12,11 @@ export interface RingFigureCase {
 const chair = ringMolecule(d3dChair(1.536, 111.4).points, { hydrogens: true });
 const twist = ringMolecule(d2TwistBoat(1.536, 111.4), { hydrogens: true });
 
-/** GED-like cyclohexane chair as the trade template, and a D2 twist-boat in its true view. */
+/** GED-like cyclohexane chair as the trade template and in its true view; a D2 twist-boat in its true view. */
 export const RING_CASES: readonly RingFigureCase[] = [
   { name: 'cyclohexane-template', mol: chair.mol, options: { rings: [chair.ring] } },
-  { name: 'twist-boat-projected', mol: twist.mol, options: { rings: [twist.ring], elevationDeg: 35, labels: 'id' } },
+  { name: 'twist-boat-projected', mol: twist.mol, options: { rings: [twist.ring], elevationDeg: 45 } },
+  { name: 'cyclohexane-projected-ids', mol: chair.mol, options: { rings: [chair.ring], view: 'projected', hydrogens: 'hide', labels: 'id' } },
 ];
 
 /** SVG text of a case in a theme, with a per-figure id prefix. */
