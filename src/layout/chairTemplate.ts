@@ -3,7 +3,7 @@
  * ring's own frame: opposite ring bonds parallel (centre of inversion), axial bonds along n and so vertical,
  * equatorial bonds exactly parallel to the ring bonds once removed (exact in the tetrahedral model [D]).
  *
- * The drawn displacement is stretched 1.4 times along n (DEPTH), which keeps every rule above.
+ * The drawn displacement is stretched 1.25 times along n (DEPTH), which keeps every rule above.
  *
  * Placement from the measured ring, never typed in: ring atom j goes to an "up" vertex when its Cremer–Pople
  * displacement z_j > 0, else to a "down" vertex; the numbering keeps its clockwise-from-+n sense on screen (the
@@ -21,7 +21,7 @@ import { type PlacedBond, type RingHydrogens, type RingPlacement } from './ringP
 
 /** Options of {@link chairTemplate}. */
 export interface ChairTemplateOptions {
-  /** Viewer elevation above the mean plane, degrees. Default 16. */
+  /** Viewer elevation above the mean plane, degrees. Default 26. */
   readonly elevationDeg?: number;
   /** Draw hydrogens on ring atoms. Default `show`. */
   readonly hydrogens?: RingHydrogens;
@@ -30,17 +30,21 @@ export interface ChairTemplateOptions {
 /** Ideal ring bond (Å) of the template; a tetrahedral chair has z = ±b/6 and projected radius b·2√2/3 [D]. */
 const BOND = 1.54;
 /**
- * Up/down displacement drawn 1.4 times the tetrahedral value, so the zig-zag reads at a glance; a stretch along
+ * Up/down displacement drawn 1.25 times the tetrahedral value, so the zig-zag reads at a glance; a stretch along
  * n keeps every parallel (and the axial bonds vertical) [common practice, no source].
  */
-const DEPTH = 1.4;
-/** Default elevation of the template, degrees: with DEPTH, both tips read as a peak and a trough. */
-export const TEMPLATE_ELEVATION_DEG = 16;
+const DEPTH = 1.25;
+/**
+ * Default elevation of the template, degrees. Below about 16° (with DEPTH) the back edge sinks to the height of
+ * the front edge and the two cross; 26° keeps the back edge clearly above the front one while both tips still
+ * read as a peak and a trough (chosen by eye on rendered figures; common practice, no source).
+ */
+export const TEMPLATE_ELEVATION_DEG = 26;
 /**
  * Turn of the template about n, degrees: at 0 the back and front atoms of each side share a column and their
- * axial bonds overlap; −15 separates them and keeps reference atom 2 the right-hand tip [common practice, no source].
+ * axial bonds overlap; −6 separates them and keeps reference atom 2 the right-hand tip [common practice, no source].
  */
-const TURN_DEG = -15;
+const TURN_DEG = -6;
 const HEAVY_LENGTH = 0.9 * BOND;
 const H_LENGTH = 0.75 * BOND;
 /** Smallest on-screen length of a substituent bond, as a fraction of its template length. */
