@@ -39,7 +39,7 @@ export function registerChair(program: Command): void {
     .option('--ring <R>', 'ring number as inspect lists it, or an ordered atom list such as 1-2-3-4-5-6 or O5-C1-C2-C3-C4-C5 (default: the first six-ring, else the first ring)')
     .option('--record <n>', 'record (frame) to draw, counted from 1 (default 1)')
     .option('--view <mode>', 'template (trade chair; chairs only) or projected (true view of any ring) (default: template for chairs, else projected)')
-    .option('--elevation <deg>', 'viewer elevation above the ring plane in degrees, -90 to 90 (default 16 for template, 20 for projected)')
+    .option('--elevation <deg>', 'viewer elevation above the ring plane in degrees, -90 to 90 (default 26 for template, 20 for projected)')
     .option('--hydrogens <mode>', 'show or hide the hydrogens on ring atoms (default show)')
     .option('--labels <mode>', 'element (groups such as OH, CH₂OH, and ring locants), id (element + number) or name (atom names from the file) (default element)')
     .option('--no-caption', 'leave out the caption (shape, descriptor, Q/θ/φ)')
