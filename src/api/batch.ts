@@ -96,10 +96,10 @@ function plan(a: RecordAnalysis, width: number, prefix: string, lowest: number |
   const label = recordLabel(a.record, width);
   const head = `${label} ${a.title}`.trim();
   const tail = a.energy && lowest !== null ? [`ΔE ${fixed(a.energy.kcal - lowest, 2)} kcal/mol`] : [];
-  const jobs: Planned[] = a.bonds.map(({ bond, view }) => {
+  const jobs: Planned[] = a.bonds.map(({ bond }) => {
     const stem = `${label}-newman-${one(bond[0])}-${one(bond[1])}`;
-    const words = `bond ${one(bond[0])}–${one(bond[1])}${view.conformation ? `, ${view.conformation}` : ''}`;
-    return { kind: 'newman', bond, idPrefix: `${prefix}${stem}-`, record: a.record, stem, caption: [head, words, ...tail], manifestBond: [one(bond[0]), one(bond[1])], manifestRing: null };
+    // the panel's own caption names the bond and its conformation
+    return { kind: 'newman', bond, idPrefix: `${prefix}${stem}-`, record: a.record, stem, caption: [head, ...tail], manifestBond: [one(bond[0]), one(bond[1])], manifestRing: null };
   });
   if (rings) {
     a.rings.forEach((r, i) => {

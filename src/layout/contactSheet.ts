@@ -39,6 +39,22 @@ export function panelLetter(k: number): string {
   return s;
 }
 
+/** Breaks `text` at spaces into at most `max` lines that fit `width`; the last is cut with an ellipsis. */
+function wrap(text: string, width: number, max: number, measure: (t: string) => number): string[] {
+  const lines: string[] = [];
+  let rest = text.trim();
+  while (rest !== '' && lines.length < max - 1 && measure(rest) > width) {
+    const words = rest.split(' ');
+    let k = words.length - 1;
+    while (k > 1 && measure(words.slice(0, k).join(' ')) > width) k--;
+    if (k < 1 || measure(words.slice(0, k).join(' ')) > width) break;
+    lines.push(words.slice(0, k).join(' '));
+    rest = words.slice(k).join(' ');
+  }
+  if (rest !== '') lines.push(fit(rest, width, measure));
+  return lines;
+}
+
 /** Cuts `text` with an ellipsis so that it fits `width`. */
 function fit(text: string, width: number, measure: (t: string) => number): string {
   if (measure(text) <= width) return text;
@@ -56,11 +72,12 @@ export function layoutContactSheet(panels: readonly SheetPanel[], options: Conta
   const measure = options.measure ?? approximateMeasure;
   const columns = Math.max(1, Math.min(options.columns ?? 4, panels.length || 1));
   const letterStyle = { ...textStyle(metrics, 'panel-letter'), fontWeight: 'bold' as const };
-  const capStyle = textStyle(metrics, 'panel-caption');
+  const capStyle = metrics.text['panel-caption'] ?? textStyle(metrics, 'caption');
   const lineH = capStyle.fontSize * 1.3;
   const letterH = letterStyle.fontSize * 1.25;
-  const maxLines = Math.max(0, ...panels.map((p) => p.caption.length));
   const cellW = Math.max(metrics.bondLength * 3, ...panels.map((p) => p.width));
+  const captions = panels.map((p) => p.caption.flatMap((line) => wrap(line, cellW, 2, (t) => measure(t, capStyle))));
+  const maxLines = Math.max(0, ...captions.map((c) => c.length));
   const panelH = Math.max(0, ...panels.map((p) => p.height));
   const gap = metrics.bondLength * 0.6;
   const cellH = letterH + panelH + maxLines * lineH + gap * 0.25;
@@ -70,8 +87,7 @@ export function layoutContactSheet(panels: readonly SheetPanel[], options: Conta
     const x0 = m + (k % columns) * (cellW + gap);
     const y0 = m + Math.floor(k / columns) * (cellH + gap);
     items.push({ type: 'text', role: 'panel-letter', x: x0, y: y0 + letterStyle.fontSize, text: panelLetter(k), anchor: 'start', ...letterStyle });
-    p.caption.forEach((line, i) => {
-      const text = fit(line, cellW, (t) => measure(t, capStyle));
+    captions[k]!.forEach((text, i) => {
       const y = y0 + letterH + panelH + (i + 1) * lineH - (lineH - capStyle.fontSize);
       items.push({ type: 'text', role: 'panel-caption', x: x0 + cellW / 2, y, text, anchor: 'middle', ...capStyle });
     });
