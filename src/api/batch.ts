@@ -104,8 +104,9 @@ function plan(a: RecordAnalysis, width: number, prefix: string, lowest: number |
   if (rings) {
     a.rings.forEach((r, i) => {
       const stem = `${label}-ring${i + 1}-${r.shape}`;
-      const words = `ring ${i + 1}: ${r.shape}${r.descriptor ? ` ${r.descriptor}` : ''}`;
-      jobs.push({ kind: 'ring', ring: i, idPrefix: `${prefix}${stem}-`, record: a.record, stem, caption: [head, words, ...tail], manifestBond: null, manifestRing: i + 1 });
+      // the panel's own caption gives shape, descriptor and puckering; name the ring when there are several
+      const caption = a.rings.length > 1 ? [head, `ring ${i + 1}`, ...tail] : [head, ...tail];
+      jobs.push({ kind: 'ring', ring: i, idPrefix: `${prefix}${stem}-`, record: a.record, stem, caption, manifestBond: null, manifestRing: i + 1 });
     });
   }
   return jobs;

@@ -8,6 +8,7 @@ import { usageError, type Warning } from '../model/errors.js';
 import type { Graph } from '../perceive/graph.js';
 import type { Theme } from '../render/theme.js';
 import { newmanFigure } from './newman.js';
+import { chairFigure } from './chair.js';
 
 /** What a figure shows: a bond [front, back] (0-based) or a ring (0-based index into `rings`). */
 export interface FigureTarget {
@@ -46,9 +47,19 @@ const newman: FigureRenderer = (ctx, target) => {
   return { svg, width: scene.width, height: scene.height, warnings };
 };
 
+const ring: FigureRenderer = (ctx, target) => {
+  if (target.ring === undefined) throw new Error('ring figure without a ring');
+  // chairFigure numbers rings from 1 among `rings`; it picks the template view for chairs, else the projection
+  const { svg, scene, warnings } = chairFigure(ctx.molecule, {
+    ring: target.ring + 1, graph: ctx.graph, rings: ctx.rings, theme: ctx.theme, idPrefix: ctx.idPrefix,
+  });
+  return { svg, width: scene.width, height: scene.height, warnings };
+};
+
 /** Renderer per figure kind. A kind missing here is skipped by batch and reported in its notes. */
 export const FIGURE_RENDERERS = new Map<FigureKind, FigureRenderer>([
   ['newman', newman],
+  ['ring', ring],
 ]);
 
 /** True when this build can draw `kind`. */

@@ -32,6 +32,8 @@ describe('batchFile', () => {
     expect(errors).toEqual([]);
     const newman = manifest.figures.filter((f) => f.kind === 'newman');
     expect(newman).toHaveLength(6 * mols.length);
+    const rings = manifest.figures.filter((f) => f.kind === 'ring');
+    expect(rings.map((f) => f.path)).toEqual(mols.map((m, k) => `r${String(k + 1).padStart(2, '0')}-ring1-${m.properties['six-ring shapes']}.svg`));
     for (let r = 1; r <= mols.length; r++) {
       const own = newman.filter((f) => f.record === r);
       expect(own).toHaveLength(6);
@@ -54,7 +56,7 @@ describe('batchFile', () => {
     expect([...listed].sort()).toEqual(files);
     expect(new Set(listed).size).toBe(listed.length);
     const sheets = manifest.figures.filter((f) => f.kind === 'sheet');
-    expect(sheets.map((s) => s.path)).toEqual(['sheet-1.svg', 'sheet-2.svg', 'sheet-3.svg']); // 66 panels, 24 a sheet
+    expect(sheets.map((s) => s.path)).toEqual(['sheet-1.svg', 'sheet-2.svg', 'sheet-3.svg', 'sheet-4.svg']); // 77 panels, 24 a sheet
     for (const f of files.filter((x) => x.endsWith('.svg'))) {
       const svg = readFileSync(join(a, f), 'utf8');
       expect(xmlProblems(svg), f).toEqual([]);
@@ -70,20 +72,20 @@ describe('batchFile', () => {
     const sheet = readFileSync(join(dir, 'sheet-1.svg'), 'utf8');
     const letters = [...sheet.matchAll(/class="panel-letter"[^>]*>([a-z]+)</g)].map((m) => m[1]);
     expect(letters.slice(0, 3)).toEqual(['a', 'b', 'c']);
-    expect(letters).toHaveLength(6 * mols.length);
-    expect(letters.at(-1)).toBe('bn'); // 66th panel: a…z, aa…az, ba…bn
+    expect(letters).toHaveLength(7 * mols.length);
+    expect(letters.at(-1)).toBe('by'); // 77th panel: a…z, aa…az, ba…by
     expect(sheet).toContain('ΔE 0.00 kcal/mol');
-    expect([...sheet.matchAll(/<svg x="/g)]).toHaveLength(6 * mols.length);
+    expect([...sheet.matchAll(/<svg x="/g)]).toHaveLength(7 * mols.length);
     expect(readManifest(dir).tables).toEqual([]);
   }, 60_000);
 
   it('batchFile with --bonds rotatable draws the methyl-free bonds only, and a bond list draws those bonds', async () => {
     const rot = temp();
     const { manifest } = await batchFile(input, rot, { bonds: 'rotatable', sheet: false, tables: [] });
-    expect(manifest.figures).toEqual([]); // ring-to-methyl bonds end at a terminal CH3: not rotatable
+    expect(manifest.figures.filter((f) => f.kind === 'newman')).toEqual([]); // ring-to-methyl bonds end at a terminal CH3: not rotatable
     const list = temp();
     const listed = await batchFile(input, list, { bonds: '1-2', sheet: false, tables: [] });
-    expect(listed.manifest.figures.map((f) => f.path).slice(0, 2)).toEqual(['r01-newman-1-2.svg', 'r02-newman-1-2.svg']);
+    expect(listed.manifest.figures.filter((f) => f.kind === 'newman').map((f) => f.path).slice(0, 2)).toEqual(['r01-newman-1-2.svg', 'r02-newman-1-2.svg']);
   }, 60_000);
 
   it('batchFile writes the rest of a file with a broken record and reports the broken one', async () => {
@@ -108,7 +110,7 @@ describe('batchFile', () => {
     writeFileSync(path, formatSdf(mols.slice(0, 1)));
     const dir = temp();
     const { manifest } = await batchFile(path, dir, { formats: ['svg', 'png', 'pdf'], tables: [] });
-    expect(manifest.figures).toHaveLength(3 * 7); // 6 Newman + 1 sheet, three formats each
+    expect(manifest.figures).toHaveLength(3 * 8); // 6 Newman + 1 ring + 1 sheet, three formats each
     expect(readFileSync(join(dir, 'r01-newman-2-3.png')).subarray(1, 4).toString()).toBe('PNG');
     expect(readFileSync(join(dir, 'sheet-1.pdf')).subarray(0, 5).toString()).toBe('%PDF-');
   }, 60_000);
