@@ -4,6 +4,8 @@ import { registerBuild } from './build.js';
 import { registerInspect } from './inspect.js';
 import { registerNewman } from './newman.js';
 import { registerChair } from './chair.js';
+import { registerBatch } from './batch.js';
+import { registerEnsemble } from './ensemble.js';
 
 export type RegisterCommand = (program: Command) => void;
 
@@ -13,4 +15,6 @@ export const COMMANDS = new Map<string, RegisterCommand>([
   ['newman', registerNewman],
   ['build', registerBuild],
   ['chair', registerChair],
+  ['batch', registerBatch],
+  ['ensemble', registerEnsemble],
 ]);
