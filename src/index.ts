@@ -40,6 +40,7 @@ export {
 export type { HaasnootParameters, HaasnootSet, HaasnootTerm } from './analysis/haasnoot.js';
 export {
   COUPLING_METHODS,
+  COUPLING_METHOD_NAMES,
   couplingsAcrossBond,
   isSkippedCoupling,
   ringCouplings,
@@ -167,6 +168,50 @@ export type { Energy, EnergyOptions, FoundEnergy } from './io/energy.js';
 export { formatXyz } from './io/formatXyz.js';
 export type { FormatXyzOptions } from './io/formatXyz.js';
 export { parseXyzComment } from './io/xyzComment.js';
+// chair (area G): chair template and projected ring figures
+export { ringViewFrame, projectPoint, shoelaceArea, checkElevation } from './layout/ringView.js';
+export type { RingViewFrame, ViewPoint } from './layout/ringView.js';
+export { toPlacementJson, DEFAULT_ELEVATION_DEG } from './layout/ringPlacement.js';
+export type { RingPlacement, PlacedBond, PlacementJson, RingView, RingHydrogens } from './layout/ringPlacement.js';
+export { chairTemplate, assertChair, ringName, TEMPLATE_ELEVATION_DEG } from './layout/chairTemplate.js';
+export type { ChairTemplateOptions } from './layout/chairTemplate.js';
+export { ringProjection } from './layout/ringProjection.js';
+export type { RingProjectionOptions } from './layout/ringProjection.js';
+export { ringCaption, descriptorRuns, ringTitle, ringDescription } from './layout/ringCaption.js';
+export type { CaptionRun } from './layout/ringCaption.js';
+export { groupText } from './layout/ringLabels.js';
+export type { RingLabels } from './layout/ringLabels.js';
+export { layoutRing } from './layout/ringLayout.js';
+export type { RingLayoutOptions } from './layout/ringLayout.js';
+export { chairFigure } from './api/chair.js';
+export type { ChairFigure, ChairFigureOptions } from './api/chair.js';
+// batch + ensemble (area H)
+export { BOND_SETS, figureBonds, ringBonds } from './analysis/figureBonds.js';
+export type { BondSet } from './analysis/figureBonds.js';
+export { layoutContactSheet, panelLetter } from './layout/contactSheet.js';
+export type { SheetPanel, ContactSheetOptions, PanelPlacement } from './layout/contactSheet.js';
+export { layoutEnergyLadder, percentText } from './layout/energyLadder.js';
+export type { LadderLevel, EnergyLadderOptions } from './layout/energyLadder.js';
+export { FIGURE_RENDERERS, canDraw, drawFigure } from './api/figureKinds.js';
+export type { FigureKind, FigureRenderer, FigureContext, FigureTarget, DrawnFigure } from './api/figureKinds.js';
+export { figureSvg } from './api/figureSvg.js';
+export type { FigureSvgOptions } from './api/figureSvg.js';
+export { contactSheet } from './api/contactSheet.js';
+export type { ContactPanel, ContactSheetSvgOptions } from './api/contactSheet.js';
+export { TABLE_FORMATS, TABLE_WRITERS, tableCsv, tableMarkdown, tableLatex, texEscape, fixed } from './api/tableText.js';
+export type { Table, TableCell, TableColumn, TableFormat } from './api/tableText.js';
+export { supportTables } from './api/supportTables.js';
+export { analyseRecord, recordLabel } from './api/recordAnalysis.js';
+export type { RecordAnalysis, RecordAnalysisOptions } from './api/recordAnalysis.js';
+export { recordOutcomes } from './api/recordStream.js';
+export type { RecordError, RecordOutcome } from './api/recordStream.js';
+export { batchFile } from './api/batch.js';
+export type { BatchOptions, BatchResult, BatchManifest, ManifestFigure } from './api/batch.js';
+export { ensembleFile, ensembleOf, isFreeEnergyField } from './api/ensemble.js';
+export type { EnsembleOptions, EnsembleResult, EnsembleReport, EnsembleConformer } from './api/ensemble.js';
+export { ensembleText } from './api/ensembleText.js';
+export { writeEnsembleFigures } from './api/ensembleFigures.js';
+export type { EnsembleFigureOptions } from './api/ensembleFigures.js';
 
 // area J (robustness): file-system reasons in words
 export { fsReason, isSystemError } from './io/fsReason.js';

@@ -3,6 +3,9 @@ import type { Command } from 'commander';
 import { registerBuild } from './build.js';
 import { registerInspect } from './inspect.js';
 import { registerNewman } from './newman.js';
+import { registerChair } from './chair.js';
+import { registerBatch } from './batch.js';
+import { registerEnsemble } from './ensemble.js';
 
 export type RegisterCommand = (program: Command) => void;
 
@@ -11,4 +14,7 @@ export const COMMANDS = new Map<string, RegisterCommand>([
   ['inspect', registerInspect],
   ['newman', registerNewman],
   ['build', registerBuild],
+  ['chair', registerChair],
+  ['batch', registerBatch],
+  ['ensemble', registerEnsemble],
 ]);

@@ -1,0 +1,136 @@
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import {
+  ensembleFile,
+  ensembleOf,
+  ensembleText,
+  formatSdf,
+  isFreeEnergyField,
+  layoutEnergyLadder,
+  prepareRecord,
+  ringCouplings,
+  isSkippedCoupling,
+  writeEnsembleFigures,
+  type Molecule,
+} from '../../src/index.js';
+import { butane } from '../helpers/newmanMolecules.js';
+import { cyclohexaneEnsembles, withProperties } from '../helpers/ensembleFiles.js';
+import { xmlProblems } from '../helpers/xmlWellFormed.js';
+
+const dirs: string[] = [];
+const temp = () => {
+  const d = mkdtempSync(join(tmpdir(), 'cmk-ens-'));
+  dirs.push(d);
+  return d;
+};
+afterAll(() => dirs.forEach((d) => rmSync(d, { recursive: true, force: true })));
+
+const at = (mol: Molecule, index: number): Molecule => ({ ...mol, source: { ...mol.source, index } });
+
+let chairs: Molecule[] = [];
+beforeAll(async () => {
+  chairs = (await cyclohexaneEnsembles()).mch.slice(0, 2); // equatorial chair, then the flipped (axial) chair
+}, 120_000);
+
+describe('ensembleFile', () => {
+  it('ensembleFile gives butane x_gauche = 0.3963 at ΔE 0.66 kcal/mol with g = 2 from a degeneracy field (derived, METHODS.md §9)', async () => {
+    const path = join(temp(), 'butane.sdf');
+    const anti = withProperties(butane(180), { 'energy (kcal/mol)': '-3.20', g: '1' }, 'anti');
+    const gauche = withProperties(butane(65), { 'energy (kcal/mol)': '-2.54', g: '2' }, 'gauche');
+    writeFileSync(path, formatSdf([gauche, anti]));
+    const { report, errors } = await ensembleFile(path, { degeneracyField: 'g' });
+    expect(errors).toEqual([]);
+    expect(report.conformers.map((c) => c.title)).toEqual(['anti', 'gauche']);
+    const g = report.conformers[1]!;
+    expect(g.record).toBe(1);
+    expect(g.relativeEnergy).toBeCloseTo(0.66, 10);
+    expect(g.degeneracy).toBe(2);
+    expect(Math.abs(g.population - 0.3963) / 0.3963).toBeLessThan(1e-4);
+    expect(report.notes.join(' ')).toMatch(/not free energies/);
+    expect(report.notes.join(' ')).toMatch(/degeneracies from field 'g'/);
+  });
+
+  it('ensembleFile gives methylcyclohexane x_eq = 0.9496 at A = 1.74 kcal/mol, also from energies given in kJ/mol (derived, METHODS.md §9)', async () => {
+    const eq = withProperties(chairs[0]!, { energy_kcal: '0' });
+    const ax = withProperties(chairs[1]!, { energy_kcal: '1.74' });
+    const { report } = ensembleOf([at(ax, 1), at(eq, 2)]);
+    expect(report.conformers[0]!.record).toBe(2);
+    expect(Math.abs(report.conformers[0]!.population - 0.9496) / 0.9496).toBeLessThan(1e-4);
+    expect(report.conformers.map((c) => c.rings[0]!.shape)).toEqual(['chair', 'chair']);
+    const kj = ensembleOf([at(withProperties(eq, { E: '0' }), 1), at(withProperties(ax, { E: String(1.74 * 4.184) }), 2)], { energy: { unit: 'kJ/mol' } });
+    expect(kj.report.conformers[0]!.population).toBeCloseTo(0.9496, 4);
+    expect(kj.report.notes.join(' ')).toMatch(/converted to kcal\/mol from kJ\/mol/);
+  });
+
+  it('ensembleOf merges a duplicate: duplicateOf names the lower record, population 0, the others unchanged', () => {
+    const eq = withProperties(chairs[0]!, { energy: '0' });
+    const ax = withProperties(chairs[1]!, { energy: '1.74' });
+    const again = withProperties(chairs[0]!, { energy: '0.02' });
+    const { report } = ensembleOf([at(eq, 1), at(ax, 2), at(again, 3)]);
+    const dup = report.conformers.find((c) => c.record === 3)!;
+    expect(dup.duplicateOf).toBe(1);
+    expect(dup.population).toBe(0);
+    expect(report.conformers.find((c) => c.record === 1)!.population).toBeCloseTo(0.9496, 4);
+    expect(report.notes.join(' ')).toMatch(/heavy-atom RMSD after optimal superposition .* 0\.125 Å/);
+    expect(report.notes.join(' ')).toMatch(/weight is not added/);
+    expect(ensembleText(report)).toMatch(/dup of r01/);
+  });
+
+  it('ensembleOf averages J over conformers with their populations (⟨J⟩ = Σ p_i J_i, METHODS.md §9)', () => {
+    const eq = at(withProperties(chairs[0]!, { energy: '0' }), 1);
+    const ax = at(withProperties(chairs[1]!, { energy: '1.74' }), 2);
+    const { report } = ensembleOf([eq, ax]);
+    const j = [eq, ax].map((m) => {
+      const p = prepareRecord(m);
+      return new Map(ringCouplings(p.molecule, p.graph, p.rings[0]!).filter((c) => !isSkippedCoupling(c)).map((c) => [`${c.front + 1}-${c.back + 1}`, 'jHz' in c ? c.jHz : 0]));
+    });
+    expect(report.averages.couplings.length).toBeGreaterThan(0);
+    const [p1, p2] = report.conformers.map((c) => c.population);
+    for (const c of report.averages.couplings) {
+      const key = `${c.front}-${c.back}`;
+      expect(c.jHz).toBeCloseTo(p1! * j[0]!.get(key)! + p2! * j[1]!.get(key)!, 10);
+      expect(c.method).toBe('haasnoot-1980');
+    }
+  });
+
+  it('isFreeEnergyField recognises free-energy field names and nothing else', () => {
+    expect(['G (kcal/mol)', 'free energy', 'Gibbs_kcal', 'dG', 'ΔG_kJ'].every(isFreeEnergyField)).toBe(true);
+    expect(['energy', 'MMFF94s energy (kcal/mol)', 'Energy_kcal', 'E'].some(isFreeEnergyField)).toBe(false);
+  });
+
+  it('ensembleFile reports a record without an energy and ranks the rest', async () => {
+    const path = join(temp(), 'partial.sdf');
+    writeFileSync(path, formatSdf([withProperties(butane(180), { energy: '0' }), withProperties(butane(65), {}), withProperties(butane(-65), { energy: '0.66' })]));
+    const { report, errors } = await ensembleFile(path);
+    expect(errors.map((e) => [e.record, e.code])).toEqual([[2, 'no-energy']]);
+    expect(report.conformers.map((c) => c.record)).toEqual([1, 3]);
+  });
+
+  it('writeEnsembleFigures writes a well-formed sheet in energy order and an energy ladder', () => {
+    const result = ensembleOf([at(withProperties(chairs[1]!, { energy: '1.74' }), 1), at(withProperties(chairs[0]!, { energy: '0' }), 2)]);
+    const dir = temp();
+    expect(writeEnsembleFigures(result, dir, { idPrefix: 'x-' })).toEqual(['ensemble-sheet-1.svg', 'energy-ladder.svg']);
+    const sheet = readFileSync(join(dir, 'ensemble-sheet-1.svg'), 'utf8');
+    const ladder = readFileSync(join(dir, 'energy-ladder.svg'), 'utf8');
+    expect(xmlProblems(sheet)).toEqual([]);
+    expect(xmlProblems(ladder)).toEqual([]);
+    const captions = [...sheet.matchAll(/class="panel-caption"[^>]*>([^<]*)</g)].map((m) => m[1]);
+    expect(captions.filter((c) => c!.startsWith('ΔE'))).toEqual(['ΔE 0.00 kcal/mol, 95.0 %', 'ΔE 1.74 kcal/mol, 5.0 %']);
+    expect(ladder).toContain('ΔE (kcal/mol)');
+    expect([...ladder.matchAll(/class="level"/g)]).toHaveLength(2);
+  });
+});
+
+describe('layoutEnergyLadder', () => {
+  it('layoutEnergyLadder keeps labels of near-degenerate levels apart and each level at its energy', () => {
+    const scene = layoutEnergyLadder([0, 0.01, 0.02, 2].map((e, i) => ({ label: `r${i + 1}`, relativeEnergy: e, population: 0.25 })));
+    const labels = scene.items.filter((i) => i.role === 'level-label').map((i) => (i.type === 'text' ? i.y : 0));
+    const sorted = [...labels].sort((a, b) => a - b);
+    for (let k = 1; k < sorted.length; k++) expect(sorted[k]! - sorted[k - 1]!).toBeGreaterThanOrEqual(8);
+    const levels = scene.items.filter((i) => i.role === 'level').map((i) => (i.type === 'line' ? i.y1 : 0));
+    expect(levels[0]! - levels[3]!).toBeGreaterThan(0); // ΔE 2 is drawn above ΔE 0 (SVG y grows downwards)
+    expect(levels[0]! - levels[1]!).toBeCloseTo(((levels[0]! - levels[3]!) * 0.01) / 2, 6);
+  });
+});
