@@ -216,4 +216,4 @@ export type { EnsembleFigureOptions } from './api/ensembleFigures.js';
 // area J (robustness): file-system reasons in words
 export { fsReason, isSystemError } from './io/fsReason.js';
 export { safeText, sceneTextWarnings, MAX_LABEL_LENGTH, type SafeText } from './layout/safeText.js';
-export { heldRecords, resolveHoldLimits, DEFAULT_HOLD_LIMITS, type HoldOptions, type HoldLimits } from './api/holdLimits.js';
+export { heldRecords, holdCounter, resolveHoldLimits, DEFAULT_HOLD_LIMITS, type HoldOptions, type HoldLimits } from './api/holdLimits.js';

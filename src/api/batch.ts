@@ -8,6 +8,7 @@ import { join } from 'node:path';
 import { ConformarkError, type Warning } from '../model/errors.js';
 import type { Molecule } from '../model/molecule.js';
 import type { StreamOptions } from '../io/readRecords.js';
+import { holdCounter, type HoldOptions } from './holdLimits.js';
 import { writeAtomic } from '../io/writeAtomic.js';
 import type { BondSet } from '../analysis/figureBonds.js';
 import type { CouplingOptions } from '../analysis/coupling.js';
@@ -50,6 +51,8 @@ export interface BatchOptions {
   readonly energy?: EnergyOptions;
   readonly coupling?: CouplingOptions;
   readonly read?: StreamOptions;
+  /** Caps on the records held at once (defaults 100,000 records, 2,000,000 atoms in all). */
+  readonly hold?: HoldOptions;
   /** Progress callback: figures done, figures in total. */
   readonly onProgress?: (done: number, total: number) => void;
 }
@@ -126,11 +129,13 @@ export async function batchFile(path: string, dir: string, options: BatchOptions
 
   // 1. Read and analyse every record; a bad one becomes an error entry and the batch goes on.
   const analysed: { molecule: Molecule; analysis: RecordAnalysis }[] = [];
+  const hold = holdCounter(path, options.hold);
   for await (const outcome of recordOutcomes(path, options.read)) {
     if ('error' in outcome) {
       errors.push(outcome.error);
       continue;
     }
+    hold.add(outcome.molecule);
     const mol = outcome.molecule;
     try {
       const prepared = prepareRecord(mol);
@@ -146,7 +151,10 @@ export async function batchFile(path: string, dir: string, options: BatchOptions
   }
 
   // 2. Plan the figures: names from zero-padded record numbers, ids unique per figure.
-  const last = Math.max(0, ...analysed.map((r) => r.analysis.record), ...errors.map((e) => e.record ?? 0));
+  // a loop, not Math.max(...list): spreading 100,000 numbers overflows the call stack
+  let last = 0;
+  for (const r of analysed) last = Math.max(last, r.analysis.record);
+  for (const e of errors) last = Math.max(last, e.record ?? 0);
   const width = Math.max(2, String(last).length);
   const energies = analysed.flatMap((r) => (r.analysis.energy ? [r.analysis.energy.kcal] : []));
   const lowest = energies.length > 0 ? energies.reduce((m, e) => Math.min(m, e)) : null;

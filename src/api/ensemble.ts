@@ -10,6 +10,7 @@
 import { ConformarkError, usageError, type Warning } from '../model/errors.js';
 import type { Molecule } from '../model/molecule.js';
 import type { StreamOptions } from '../io/readRecords.js';
+import { holdCounter, type HoldOptions } from './holdLimits.js';
 import { findEnergy, normalizeEnergyUnit, type EnergyOptions } from '../io/energy.js';
 import { toKcalPerMol } from '../model/energyUnits.js';
 import { boltzmannPopulations, ensembleAverage } from '../analysis/boltzmann.js';
@@ -32,6 +33,8 @@ export interface EnsembleOptions {
   /** Coupling equation for ⟨J⟩ (default Haasnoot–de Leeuw–Altona 1980). */
   readonly coupling?: CouplingOptions;
   readonly read?: StreamOptions;
+  /** Caps on the records held at once (defaults 100,000 records, 2,000,000 atoms in all). */
+  readonly hold?: HoldOptions;
 }
 
 /** One conformer of the report (`conformark/ensemble@1` `conformers[]`). */
@@ -178,11 +181,13 @@ export async function ensembleFile(path: string, options: EnsembleOptions = {}):
   }
   const errors: RecordError[] = [];
   const good: Molecule[] = [];
+  const hold = holdCounter(path, options.hold);
   for await (const outcome of recordOutcomes(path, options.read)) {
     if ('error' in outcome) {
       errors.push(outcome.error);
       continue;
     }
+    hold.add(outcome.molecule);
     const mol = outcome.molecule;
     try {
       if (!findEnergy(mol, options.energy)) throw usageError('no-energy', `record ${mol.source.index} has no energy; it is left out`);

@@ -41,7 +41,7 @@ export function writeEnsembleFigures(result: EnsembleResult, dir: string, option
   const theme = loadTheme(options.theme);
   const prefix = options.idPrefix ?? '';
   const { conformers } = result.report;
-  const width = Math.max(2, String(Math.max(...conformers.map((c) => c.record))).length);
+  const width = Math.max(2, String(conformers.reduce((m, c) => Math.max(m, c.record), 0)).length);
   const label = (n: number) => `r${String(n).padStart(width, '0')}`;
   const written: string[] = [];
   const panels: ContactPanel[] = [];

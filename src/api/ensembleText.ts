@@ -1,17 +1,19 @@
 /** The ranked table `ensemble` prints: rank, record, title, E, ΔE, population, ring shapes; then the notes. */
+import { safeText } from '../layout/safeText.js';
 import { fixed } from './tableText.js';
 import { percentText } from '../layout/energyLadder.js';
 import type { EnsembleReport } from './ensemble.js';
 
 const pad = (s: string, n: number, right = false) => (right ? s.padStart(n) : s.padEnd(n));
-const cut = (s: string, n: number) => ([...s].length > n ? `${[...s].slice(0, n - 1).join('')}…` : s);
+// titles come from files: no terminal control sequences (safeText), then cut to the column
+const cut = (s: string, n: number) => safeText(s, n).text;
 
 /**
  * Plain-text table of an ensemble report, columns aligned, one conformer per line in energy order.
  * @example process.stdout.write(ensembleText(report))
  */
 export function ensembleText(report: EnsembleReport): string {
-  const width = Math.max(2, String(Math.max(...report.conformers.map((c) => c.record))).length);
+  const width = Math.max(2, String(report.conformers.reduce((m, c) => Math.max(m, c.record), 0)).length);
   let rank = 0;
   const rows = report.conformers.map((c) => [
     c.duplicateOf === null ? String(++rank) : '–',
@@ -24,7 +26,7 @@ export function ensembleText(report: EnsembleReport): string {
   ]);
   const head = ['rank', 'record', 'title', `E (${report.unit})`, `ΔE (${report.unit})`, 'population', 'rings'];
   const right = [true, false, false, true, true, true, false];
-  const w = head.map((h, k) => Math.max([...h].length, ...rows.map((r) => [...r[k]!].length)));
+  const w = head.map((h, k) => rows.reduce((m, r) => Math.max(m, [...r[k]!].length), [...h].length));
   const line = (cells: string[]) => cells.map((s, k) => pad(s, w[k]! + (s.length - [...s].length), right[k])).join('  ').trimEnd();
   const unique = report.conformers.filter((c) => c.duplicateOf === null).length;
   const out = [

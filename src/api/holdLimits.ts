@@ -31,26 +31,39 @@ export function resolveHoldLimits(options: HoldOptions = {}): HoldLimits {
 }
 
 /**
- * Passes the records of `source` through, and stops with a `too-many-records` or `too-many-atoms-total`
- * error (naming the file, the record and how to raise the limit) once holding the next one would exceed a cap.
- * @example for await (const mol of heldRecords(readRecords(path), path)) all.push(mol)
+ * Counts the records a command holds and throws `too-many-records` or `too-many-atoms-total` (naming the
+ * file, the record and how to raise the limit) when one more would exceed a cap.
+ * @example const hold = holdCounter(path); for (const mol of list) hold.add(mol)
  */
-export async function* heldRecords(source: AsyncIterable<Molecule>, path: string, options: HoldOptions = {}): AsyncGenerator<Molecule> {
+export function holdCounter(path: string, options: HoldOptions = {}): { add(mol: Molecule): void } {
   const limits = resolveHoldLimits(options);
   let records = 0;
   let atoms = 0;
+  return {
+    add(mol: Molecule): void {
+      records++;
+      atoms += mol.atoms.length;
+      const line = mol.source.line > 0 ? mol.source.line : null;
+      if (records > limits.maxRecords) {
+        const message = `record ${mol.source.index}: more than ${limits.maxRecords} records to hold at once (raise with --max-records, option maxRecords)`;
+        throw new ConformarkError({ code: 'too-many-records', file: path, line, message });
+      }
+      if (atoms > limits.maxTotalAtoms) {
+        const message = `record ${mol.source.index}: more than ${limits.maxTotalAtoms} atoms in all records to hold at once (raise with --max-total-atoms, option maxTotalAtoms)`;
+        throw new ConformarkError({ code: 'too-many-atoms-total', file: path, line, message });
+      }
+    },
+  };
+}
+
+/**
+ * Passes the records of `source` through a {@link holdCounter}.
+ * @example for await (const mol of heldRecords(readRecords(path), path)) all.push(mol)
+ */
+export async function* heldRecords(source: AsyncIterable<Molecule>, path: string, options: HoldOptions = {}): AsyncGenerator<Molecule> {
+  const hold = holdCounter(path, options);
   for await (const mol of source) {
-    records++;
-    atoms += mol.atoms.length;
-    const line = mol.source.line > 0 ? mol.source.line : null;
-    if (records > limits.maxRecords) {
-      const message = `record ${records}: more than ${limits.maxRecords} records to hold at once (raise with --max-records, option maxRecords)`;
-      throw new ConformarkError({ code: 'too-many-records', file: path, line, message });
-    }
-    if (atoms > limits.maxTotalAtoms) {
-      const message = `record ${records}: more than ${limits.maxTotalAtoms} atoms in all records to hold at once (raise with --max-total-atoms, option maxTotalAtoms)`;
-      throw new ConformarkError({ code: 'too-many-atoms-total', file: path, line, message });
-    }
+    hold.add(mol);
     yield mol;
   }
 }

@@ -159,6 +159,6 @@ function couplings(records: readonly RecordAnalysis[]): Table {
  */
 export function supportTables(records: readonly RecordAnalysis[]): Table[] {
   const energies = records.flatMap((r) => (r.energy ? [r.energy.kcal] : []));
-  const lowest = energies.length > 0 ? Math.min(...energies) : null;
+  const lowest = energies.length > 0 ? energies.reduce((m, e) => Math.min(m, e), Infinity) : null;
   return [torsions(records), puckering(records), shapes(records, lowest), substituents(records), couplings(records)];
 }

@@ -75,10 +75,10 @@ export function layoutContactSheet(panels: readonly SheetPanel[], options: Conta
   const capStyle = metrics.text['panel-caption'] ?? textStyle(metrics, 'caption');
   const lineH = capStyle.fontSize * 1.3;
   const letterH = letterStyle.fontSize * 1.25;
-  const cellW = Math.max(metrics.bondLength * 3, ...panels.map((p) => p.width));
+  const cellW = panels.reduce((m, p) => Math.max(m, p.width), metrics.bondLength * 3);
   const captions = panels.map((p) => p.caption.flatMap((line) => wrap(line, cellW, 2, (t) => measure(t, capStyle))));
-  const maxLines = Math.max(0, ...captions.map((c) => c.length));
-  const panelH = Math.max(0, ...panels.map((p) => p.height));
+  const maxLines = captions.reduce((m, c) => Math.max(m, c.length), 0);
+  const panelH = panels.reduce((m, p) => Math.max(m, p.height), 0);
   const gap = metrics.bondLength * 0.6;
   const cellH = letterH + panelH + maxLines * lineH + gap * 0.25;
   const m = metrics.margin;

@@ -52,12 +52,12 @@ export function layoutEnergyLadder(levels: readonly LadderLevel[], options: Ener
   const tick = textStyle(metrics, 'tick-label');
   const lab = textStyle(metrics, 'level-label');
   const axisTitle = textStyle(metrics, 'axis-label');
-  const top = Math.max(1, ...levels.map((l) => l.relativeEnergy));
+  const top = levels.reduce((m, l) => Math.max(m, l.relativeEnergy), 1);
   const step = tickStep(top);
   const yMax = Math.ceil(top / step - 1e-9) * step;
   const digits = step < 1 ? (step < 0.1 ? 2 : 1) : 0;
   const tickTexts = Array.from({ length: Math.round(yMax / step) + 1 }, (_, k) => num(k * step, digits));
-  const tickW = Math.max(...tickTexts.map((t) => measure(t, tick)));
+  const tickW = tickTexts.reduce((m, t) => Math.max(m, measure(t, tick)), -Infinity);
   const m = metrics.margin;
   const plotTop = m + axisTitle.fontSize * 2;
   const plotH = Math.max(8 * B, levels.length * lab.fontSize * 1.35);

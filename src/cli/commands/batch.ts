@@ -11,7 +11,7 @@ import {
   type FigureFormat,
   type TableFormat,
 } from '../../index.js';
-import { oneOf, printWarnings, wholeNumber } from '../options.js';
+import { limitsOf, oneOf, printWarnings, wholeNumber } from '../options.js';
 
 interface BatchFlags {
   dir: string;
@@ -47,7 +47,8 @@ export function registerBatch(program: Command): void {
     .option('--jobs <n>', 'worker threads for figures, used above 40 figures (default min(4, cores))')
     .option('--energy-field <name>', 'SD field or XYZ key holding the energy (default: the first whose name contains "energy")')
     .option('--energy-unit <unit>', 'unit of the energies: kcal/mol, kJ/mol, hartree, eV (default: from the field name)')
-    .action(async (file: string, flags: BatchFlags) => {
+    .action(async (file: string, flags: BatchFlags, command: Command) => {
+      const { read, hold } = limitsOf(command);
       protectInput(file);
       const formats = flags.formats === undefined ? undefined : wordList<FigureFormat>('--formats', flags.formats, [...FIGURE_FORMATS.keys()]);
       const tables = flags.tables === undefined ? undefined : flags.tables.trim() === 'none' ? [] : wordList<TableFormat>('--tables', flags.tables, [...TABLE_FORMATS.keys()]);
@@ -57,6 +58,7 @@ export function registerBatch(program: Command): void {
       const result = await batchFile(file, flags.dir, {
         bonds: flags.bonds, formats, tables, jobs, theme: flags.theme, idPrefix: flags.idPrefix, sheet: flags.sheet !== false,
         energy: { field: flags.energyField, unit: flags.energyUnit },
+        read, hold,
         onProgress: bar
           ? (done, total) => {
               if (!started) bar.start(total, done);

@@ -14,7 +14,7 @@ import {
   type RingLabels,
   type RingView,
 } from '../../index.js';
-import { finiteNumber, oneOf, printWarnings, wholeNumber } from '../options.js';
+import { finiteNumber, limitsOf, oneOf, printWarnings, wholeNumber } from '../options.js';
 
 interface ChairFlags {
   ring?: string;
@@ -47,10 +47,11 @@ export function registerChair(program: Command): void {
     .option('--id-prefix <p>', 'prefix for ids inside the SVG, to keep several figures on one page apart (default chair-)')
     .option('--json', 'print the ring analysis and the 2D placement (conformark/chair@1) instead of a figure')
     .option('-o, --output <file>', 'write to FILE (.svg, .png or .pdf; .json with --json) instead of standard output')
-    .action(async (file: string, flags: ChairFlags) => {
+    .action(async (file: string, flags: ChairFlags, command: Command) => {
+      const { read } = limitsOf(command);
       if (flags.output) protectInput(file);
       const recordNumber = wholeNumber('--record', flags.record ?? '1');
-      const { molecule, graph, rings } = prepareRecord(await readRecord(file, recordNumber));
+      const { molecule, graph, rings } = prepareRecord(await readRecord(file, recordNumber, read));
       const ordered = flags.ring !== undefined && !/^\s*\d+\s*$/.test(flags.ring);
       const ring = flags.ring === undefined ? undefined : ordered ? ringSelection(molecule, graph, rings, flags.ring) : Number(flags.ring.trim());
       const figure = chairFigure(molecule, {

@@ -1,7 +1,7 @@
 /** `conformark ensemble FILE`: conformers ranked by energy with Boltzmann populations; sheet and energy ladder. */
 import type { Command } from 'commander';
 import { ensembleFile, ensembleText, formatIssue, jsonText, protectInput, writeEnsembleFigures } from '../../index.js';
-import { finiteNumber, printWarnings } from '../options.js';
+import { finiteNumber, limitsOf, printWarnings } from '../options.js';
 
 interface EnsembleFlags {
   temperature?: string;
@@ -30,13 +30,16 @@ export function registerEnsemble(program: Command): void {
     .option('-d, --dir <dir>', 'also write the conformer sheet and the energy ladder (SVG) into this folder')
     .option('--theme <name|path>', 'figure theme: column, projector, contrast, or a .json file (default column)')
     .option('--id-prefix <p>', 'put before every id in the figures')
-    .action(async (file: string, flags: EnsembleFlags) => {
+    .action(async (file: string, flags: EnsembleFlags, command: Command) => {
+      const { read, hold } = limitsOf(command);
       protectInput(file);
       const result = await ensembleFile(file, {
         temperatureK: flags.temperature === undefined ? undefined : finiteNumber('--temperature', flags.temperature, 1e-6),
         energy: { field: flags.energyField, unit: flags.energyUnit },
         degeneracyField: flags.degeneracyField,
         rmsdThresholdA: flags.rmsd === undefined ? undefined : finiteNumber('--rmsd', flags.rmsd, 0),
+        read,
+        hold,
       });
       for (const e of result.errors) process.stderr.write(`conformark: ${formatIssue(e)}\n`);
       for (const { record, warning } of result.warnings) printWarnings([warning], `${file}: record ${record}`);
