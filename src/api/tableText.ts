@@ -3,6 +3,7 @@
  * with a fixed number of decimals per column, so the same data always gives the same text. No siunitx:
  * LaTeX cells are plain numbers (negative signs typeset as `$-$`).
  */
+import { safeText } from '../layout/safeText.js';
 
 /** A cell: text, a number (formatted with the column's digits) or `null` (no value). */
 export type TableCell = string | number | null;
@@ -57,7 +58,9 @@ export function tableCsv(table: Table): string {
   return `${lines.join('\n')}\n`;
 }
 
-const mdField = (text: string) => text.replace(/\\/g, '\\\\').replace(/\|/g, '\\|').replace(/[\r\n]+/g, ' ');
+// Markdown renderers pass raw HTML through: `<`, `>` and `&` become entities, controls and bidi overrides U+FFFD
+const mdField = (text: string) =>
+  safeText(text, Number.POSITIVE_INFINITY).text.replace(/\\/g, '\\\\').replace(/\|/g, '\\|').replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;');
 
 /** Markdown: caption as a bold line, pipe table, numbers right-aligned, `–` for no value. */
 export function tableMarkdown(table: Table): string {

@@ -72,7 +72,8 @@ export function usageLine(err: CommanderError, command: string | null): string {
   return `conformark: ${rewritten.split('\n').join(' ')}; see ${help}`;
 }
 
-function reportFailure(err: unknown, debug: boolean, command: string | null): number {
+/** Prints a failure as one line (user error) or an "internal error" line plus a hint or the stack; returns the exit code. */
+export function reportFailure(err: unknown, debug: boolean, command: string | null): number {
   if (err instanceof CommanderError) {
     if (err.code === 'commander.helpDisplayed' || err.code === 'commander.version') return EXIT.ok;
     if (err.code === 'commander.help') return EXIT.usage; // help shown because a command was missing

@@ -39,7 +39,7 @@ export class LineSplitter {
     if (cut < buf.length) this.carry = Buffer.from(buf.subarray(cut));
     const whole = buf.subarray(0, cut);
     // isUtf8 + toString is several times faster than a fatal TextDecoder
-    if (!isUtf8(whole)) throw this.notText();
+    if (!isUtf8(whole)) throw this.notText(this.lineNo + 1 + badUtf8Line(whole, this.rest));
     return this.pushText(whole.toString('utf8'));
   }
 
@@ -100,12 +100,12 @@ export class LineSplitter {
     );
   }
 
-  private notText(): ParseError {
+  private notText(lineNo = this.lineNo + 1): ParseError {
     return new ParseError(
       issue(
         'binary-input',
         this.file,
-        this.lineNo + 1,
+        lineNo,
         'this is not a text file (NUL bytes or invalid UTF-8); expected XYZ, SDF/molfile or PDB text',
       ),
     );
@@ -122,4 +122,18 @@ function completeLength(buf: Uint8Array): number {
   if (lead < 0xc0) return n;
   const size = lead >= 0xf0 ? 4 : lead >= 0xe0 ? 3 : 2;
   return i + size > n ? i : n;
+}
+
+/** Line breaks before the first invalid UTF-8 sequence of `buf` (which continues the partial line `rest`). */
+function badUtf8Line(buf: Buffer, rest: string): number {
+  let lo = 0;
+  let hi = buf.length; // isUtf8(buf[0, lo)) holds; the first bad byte lies in [lo, hi)
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >>> 1;
+    if (isUtf8(buf.subarray(0, completeLength(buf.subarray(0, mid))))) lo = mid;
+    else hi = mid;
+  }
+  let breaks = 0;
+  for (let i = 0; i < lo; i++) if (buf[i] === 10) breaks++;
+  return rest === '' || breaks > 0 ? breaks : 0;
 }

@@ -2,7 +2,7 @@
  * Raw input as a stream of byte chunks of about 1 MiB: a file or standard input (`-`), gunzipped
  * transparently when it starts with the gzip magic bytes (whatever its name).
  */
-import { createReadStream } from 'node:fs';
+import { createReadStream, statSync } from 'node:fs';
 import { Readable, pipeline } from 'node:stream';
 import { createGunzip } from 'node:zlib';
 import { ParseError } from '../model/errors.js';
@@ -18,9 +18,11 @@ export function isGzip(bytes: Uint8Array): boolean {
 
 /**
  * Yields the (decompressed) bytes of `path`; `-` is standard input.
- * File-system errors (ENOENT, EACCES) are thrown as they are; a corrupt gzip stream is a `ParseError`.
+ * File-system errors (ENOENT, EACCES) are thrown as they are; a folder (`not-a-file`) or a corrupt gzip stream is a `ParseError`.
  */
 export async function* openInput(path: string): AsyncGenerator<Uint8Array> {
+  // a folder opens fine and fails on the first read with an EISDIR that names no path: say it here
+  if (path !== '-' && isFolder(path)) throw new ParseError(issue('not-a-file', path, null, 'is a folder, not a file'));
   const raw = path === '-' ? process.stdin : createReadStream(path, { highWaterMark: CHUNK_BYTES });
   const it = (raw as AsyncIterable<Uint8Array>)[Symbol.asyncIterator]();
   try {
@@ -33,6 +35,14 @@ export async function* openInput(path: string): AsyncGenerator<Uint8Array> {
     }
   } finally {
     await it.return?.();
+  }
+}
+
+function isFolder(path: string): boolean {
+  try {
+    return statSync(path).isDirectory();
+  } catch {
+    return false; // a missing file is reported by the read itself (ENOENT)
   }
 }
 

@@ -1,0 +1,291 @@
+/**
+ * End-to-end robustness of the built CLI (`npx tsc -p tsconfig.build.json` first): every broken file of
+ * test/data/bad gives one line naming file and line, exit 2, nothing on stdout, and leaves an existing output
+ * file byte for byte as it was; CRLF, BOM and tab files work; limits and bad selections have clear errors.
+ * Tables run the built `main` in this process (`cliInProcess`, what bin/conformark.js calls) to keep the suite
+ * fast on a loaded machine; argument parsing, stdin, protection of inputs and every command's output on
+ * degenerate input also run through the binary itself (`cli`).
+ */
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { linkSync, mkdtempSync, readdirSync, readFileSync, rmSync, symlinkSync, writeFileSync, copyFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { cli, cliInProcess, degenerateXyz, LEAK, UNSAFE_SVG } from './robustnessHelpers.js';
+
+const BAD = 'test/data/bad';
+const SENTINEL = 'sentinel: an older output that a failed run must not touch\n';
+
+/** file → the one stderr line `inspect` prints (after `conformark: test/data/bad/`). */
+const CORPUS: readonly (readonly [string, string])[] = [
+  ['bad-bond.sdf', 'bad-bond.sdf:9: bond 2 refers to atom 4, but the record has 3 atoms'],
+  ['bad-charge.sdf', 'bad-charge.sdf:10: charge given for atom 9, but the record has 3 atoms'],
+  ['bad-conect-text.pdb', "bad-conect-text.pdb:5: expected atom serial numbers in CONECT, found 'two'"],
+  ['bad-conect.pdb', 'bad-conect.pdb:5: CONECT refers to atom serial 99, which is not in the file'],
+  ['bad-coords.pdb', "bad-coords.pdb:3: x coordinate 'x.957' is not a number (columns 31-38)"],
+  ['bad-counts.sdf', "bad-counts.sdf:4: expected a counts line (atoms, bonds, ..., V2000), found 'x  y  0  0  0  0  0  0  0  0999 V2000'"],
+  ['blank.xyz', 'blank.xyz: the file is empty'],
+  ['empty.xyz', 'empty.xyz: the file is empty'],
+  ['extra-atoms.xyz', 'extra-atoms.xyz:6: more atom lines than the count line of frame 1 says (3)'],
+  ['garbage.bin', 'garbage.bin:1: this is not a text file (NUL bytes or invalid UTF-8); expected XYZ, SDF/molfile or PDB text'],
+  ['random.xyz', 'random.xyz:1: this is not a text file (NUL bytes or invalid UTF-8); expected XYZ, SDF/molfile or PDB text'],
+  ['latin1.xyz', 'latin1.xyz:2: this is not a text file (NUL bytes or invalid UTF-8); expected XYZ, SDF/molfile or PDB text'],
+  ['huge-count.xyz', 'huge-count.xyz:1: count line says 999999999999 atoms; the limit is 1000000 (option maxAtoms)'],
+  ['infinite.xyz', "infinite.xyz:4: x coordinate '1e999' is not finite"],
+  ['nan.sdf', "nan.sdf:6: x coordinate 'NaN' is not a number"],
+  ['nan.xyz', "nan.xyz:4: x coordinate 'NaN' is not a number"],
+  ['negative-count.xyz', "negative-count.xyz:1: expected an atom count, found '-3'"],
+  ['no-count.xyz', "no-count.xyz:1: expected an atom count, found 'water'"],
+  ['no-m-end.sdf', 'no-m-end.sdf:4: record ends before M  END'],
+  ['not-a-number.xyz', "not-a-number.xyz:4: y coordinate 'abc' is not a number"],
+  ['one-bad-of-three.sdf', 'one-bad-of-three.sdf:20: bond 2 refers to atom 7, but the record has 3 atoms'],
+  ['overlap.pdb', 'overlap.pdb:3: atoms 1 (O) and 2 (H1) are 0.10 Å apart, closer than 0.4 Å'],
+  ['overlap.xyz', 'overlap.xyz:5: atoms 2 (H) and 3 (H) are 0.12 Å apart, closer than 0.4 Å'],
+  ['short-line.xyz', "short-line.xyz:3: expected an element and x y z, found 'O 0.000 0.000'"],
+  ['truncated-bonds.sdf', 'truncated-bonds.sdf:4: expected 2 bonds, found 1'],
+  ['truncated.sdf', 'truncated.sdf:4: expected 3 atoms, found 2'],
+  ['truncated.xyz', 'truncated.xyz:1: expected 3 atoms, found 2'],
+  ['unknown-element.pdb', "unknown-element.pdb:3: unknown element 'XX' (columns 77-78)"],
+  ['unknown-element.sdf', "unknown-element.sdf:6: unknown element 'Qq'"],
+  ['unknown-element.xyz', "unknown-element.xyz:4: unknown element 'Qz'"],
+  ['v3000-bad-bond.sdf', 'v3000-bad-bond.sdf:14: bond 2 refers to atom 5, which is not in the atom block'],
+  ['v3000-huge-count.sdf', 'v3000-huge-count.sdf:6: counts line says 999999999999 atoms; the limit is 1000000 (option maxAtoms)'],
+  ['v3000-truncated.sdf', 'v3000-truncated.sdf:16: the V3000 table ends without END CTAB'],
+  ['v3000-wrong-count.sdf', 'v3000-wrong-count.sdf:6: expected 3 atoms, found 2'],
+  ['wrong-count.sdf', 'wrong-count.sdf:4: expected 4 atoms, found 3'],
+  ['wrong-count.xyz', 'wrong-count.xyz:1: expected 3 atoms, found 2'],
+];
+
+/** One broken file per reader and failure kind, also run through `newman` (record 1 is the bad one). */
+const NEWMAN_CORPUS = ['empty.xyz', 'garbage.bin', 'latin1.xyz', 'huge-count.xyz', 'nan.sdf', 'v3000-truncated.sdf', 'bad-coords.pdb', 'overlap.xyz'];
+
+let dir = '';
+beforeAll(() => {
+  dir = mkdtempSync(join(tmpdir(), 'conformark-robust-'));
+});
+afterAll(() => rmSync(dir, { recursive: true, force: true }));
+
+/** A fresh folder holding a sentinel output file; returns both paths. */
+function sentinelIn(name: string, file = 'out.txt'): { folder: string; out: string } {
+  const folder = mkdtempSync(join(dir, `${name.replace(/\W/g, '_')}-`));
+  const out = join(folder, file);
+  writeFileSync(out, SENTINEL);
+  return { folder, out };
+}
+
+/** The sentinel is unchanged and no temporary file was left beside it. */
+function expectUntouched(folder: string, out: string): void {
+  expect(readFileSync(out, 'utf8')).toBe(SENTINEL);
+  expect(readdirSync(folder).filter((f) => f.endsWith('.tmp'))).toEqual([]);
+}
+
+describe('conformark on the bad-input corpus', () => {
+  it.each(CORPUS)('conformark inspect %s -o FILE prints one line, exits 2 and keeps FILE', async (file, message) => {
+    const { folder, out } = sentinelIn(file);
+    const r = await cliInProcess(['inspect', `${BAD}/${file}`, '-o', out]);
+    expect(r.stderr).toBe(`conformark: ${BAD}/${message}\n`);
+    expect(r.status).toBe(2);
+    expect(r.stdout).toBe('');
+    expectUntouched(folder, out);
+  });
+
+  it.each(NEWMAN_CORPUS)('conformark newman %s --bond 1-2 -o FILE.svg prints the reader error and keeps FILE.svg', async (file) => {
+    const { folder, out } = sentinelIn(file, 'figure.svg');
+    const r = await cliInProcess(['newman', `${BAD}/${file}`, '--bond', '1-2', '-o', out]);
+    expect(r.stderr).toBe(`conformark: ${BAD}/${CORPUS.find(([f]) => f === file)![1]}\n`);
+    expect(r.status).toBe(2);
+    expect(r.stdout).toBe('');
+    expectUntouched(folder, out);
+  });
+
+  it.each(['good-bom-crlf-tabs.xyz', 'good-crlf.sdf', 'good-bom-crlf.pdb', 'good-water.sdf'])(
+    'conformark inspect and newman read %s (BOM, CRLF, tabs are fine)',
+    async (file) => {
+      const inspect = await cliInProcess(['inspect', `test/data/${file}`, '--json']);
+      expect(inspect.stderr).toBe('');
+      expect(inspect.status).toBe(0);
+      const report = JSON.parse(inspect.stdout) as { records: { atoms: { element: string }[]; bonds: unknown[] }[] };
+      expect(report.records[0]!.atoms.map((a) => a.element)).toEqual(['O', 'H', 'H']);
+      expect(report.records[0]!.bonds).toHaveLength(2);
+      const newman = await cliInProcess(['newman', `test/data/${file}`, '--bond', '1-2', '--json']);
+      expect(newman.status).toBe(0);
+      expect(JSON.parse(newman.stdout)).toMatchObject({ front: { atom: 1, element: 'O' }, back: { atom: 2, element: 'H' } });
+    },
+  );
+});
+
+describe('conformark limits', () => {
+  it('conformark inspect on a 10 MB single line stops with line-too-long at line 1 (file and stdin)', async () => {
+    const path = join(dir, 'one-line.xyz');
+    const line = `3 ${'x'.repeat(10 * 1024 * 1024)}\n`;
+    writeFileSync(path, line);
+    const r = await cli(['inspect', path]);
+    expect(r.stderr).toBe(`conformark: ${path}:1: line is longer than 100000 characters\n`);
+    expect(r.status).toBe(2);
+    const piped = await cli(['inspect', '-'], { input: line });
+    expect(piped.stderr).toBe('conformark: -:1: line is longer than 100000 characters\n');
+    expect(piped.status).toBe(2);
+  });
+
+  it('conformark --max-records / --max-total-atoms / --max-atoms / --max-line-length stop with the limit named', async () => {
+    const path = join(dir, 'three.xyz');
+    writeFileSync(path, '3\nw1\nO 0 0 0\nH 0.96 0 0\nH -0.24 0.93 0\n'.repeat(3));
+    const cases: [string[], string][] = [
+      [['inspect', path, '--max-records', '2'], `${path}:11: more than 2 records (option maxRecords)`],
+      [['--max-total-atoms', '5', 'inspect', path], `${path}:6: record 2: more than 5 atoms in all records to hold at once (raise with --max-total-atoms, option maxTotalAtoms)`],
+      [['newman', path, '--bond', '1-2', '--max-atoms', '2'], `${path}:1: count line says 3 atoms; the limit is 2 (option maxAtoms)`],
+      [['newman', path, '--bond', '1-2', '--max-line-length', '5'], `${path}:3: line is longer than 5 characters`],
+      [['inspect', path, '--max-records', 'lots'], '--max-records expects a whole number from 1, got "lots"'],
+    ];
+    for (const [args, message] of cases) {
+      const r = await cliInProcess(args);
+      expect(r.stderr).toBe(`conformark: ${message}\n`);
+      expect(r.status).toBe(2);
+      expect(r.stdout).toBe('');
+    }
+    expect((await cliInProcess(['inspect', path, '--max-records', '3'])).status).toBe(0);
+  });
+});
+
+describe('conformark bad selections and usage', () => {
+  const water = 'test/data/good-water.sdf';
+  /** arguments → the exact stderr line (without `conformark: `). */
+  const CASES: readonly (readonly [string, readonly string[], string])[] = [
+    ['atom out of range', ['newman', water, '--bond', '1-9'], `${water}: atom 9 does not exist (the record has 3 atoms)`],
+    ['atoms not bonded', ['newman', water, '--bond', '2-3'], `${water}: atoms 2 and 3 are not bonded`],
+    ['record out of range', ['newman', water, '--bond', '1-2', '--record', '4'], `${water}: record 4 does not exist (the file has 1 record)`],
+    ['record not a number', ['newman', water, '--bond', '1-2', '--record', 'two'], '--record expects a whole number from 1, got "two"'],
+    ['unparseable selection', ['newman', water, '--bond', '1--2'], `${water}: bond '1--2' should be two atoms joined by '-', e.g. 3-4`],
+    ['unknown theme', ['newman', water, '--bond', '1-2', '--theme', 'neon'], 'unknown theme "neon" (built-in: column, projector, contrast; or give a path to a .json file)'],
+    ['no ring to draw', ['chair', water], `${water}: no ring to draw in record 1`],
+    ['missing file', ['inspect', 'no/such/file.xyz'], 'no/such/file.xyz: no such file'],
+    ['a folder as input', ['inspect', 'test/data'], 'test/data: is a folder, not a file'],
+    ['unknown option value', ['newman', water, '--bond', '1-2', '--angles', 'wobbly'], '--angles expects one of true, ideal, got "wobbly"'],
+    ['unknown figure format', ['newman', water, '--bond', '1-2', '-o', 'figure.gif'], 'cannot tell the figure format from "figure.gif": use .svg, .png or .pdf'],
+    ['unknown command', ['inpsect', water], "unknown command 'inpsect' (did you mean inspect?); see conformark --help"],
+    ['unknown option', ['inspect', water, '--jsn'], "unknown option '--jsn' (did you mean --json?); see conformark inspect --help"],
+    ['missing argument', ['inspect'], 'missing the <file> argument; see conformark inspect --help'],
+    ['missing required option', ['newman', water], '--bond <A-B> is required; see conformark newman --help'],
+    ['option without its value', ['newman', water, '--bond'], '--bond needs a value; see conformark newman --help'],
+    ['no command', [], 'no command given (commands: inspect, newman, build, chair, batch, ensemble); see conformark --help'],
+    ['user error with --debug: still one line', ['--debug', 'newman', water, '--bond', '1-9'], `${water}: atom 9 does not exist (the record has 3 atoms)`],
+    ['--debug after the command', ['newman', water, '--bond', '2-3', '--debug'], `${water}: atoms 2 and 3 are not bonded`],
+  ];
+
+  it.each(CASES)('%s: one exact line on stderr, nothing on stdout, exit 2', async (_what, args, message) => {
+    const r = await cliInProcess(args);
+    expect(r.stderr).toBe(`conformark: ${message}\n`);
+    expect(r.stdout).toBe('');
+    expect(r.status).toBe(2);
+  });
+
+  it.concurrent.each(CASES.filter(([what]) => /command|debug|option/.test(what)))('%s, through the binary: the same line', async (_what, args, message) => {
+    const r = await cli(args);
+    expect(r.stderr).toBe(`conformark: ${message}\n`);
+    expect(r.stdout).toBe('');
+    expect(r.status).toBe(2);
+  });
+
+  it('--debug before or after the command leaves a good run unchanged', async () => {
+    const plain = await cli(['newman', water, '--bond', '1-2', '--json']);
+    const before = await cli(['--debug', 'newman', water, '--bond', '1-2', '--json']);
+    const after = await cli(['newman', water, '--bond', '1-2', '--json', '--debug']);
+    expect(plain.status).toBe(0);
+    expect(before).toEqual(plain);
+    expect(after).toEqual(plain);
+  });
+});
+
+describe.concurrent('conformark never overwrites its input', () => {
+  it('conformark inspect -o refuses the input itself, through ./, .., an absolute path, a symlink and a hard link', async () => {
+    const folder = mkdtempSync(join(dir, 'self-'));
+    const input = join(folder, 'in.xyz');
+    copyFileSync('test/data/good-bom-crlf-tabs.xyz', input);
+    const bytes = readFileSync(input);
+    symlinkSync(input, join(folder, 'soft.xyz'));
+    linkSync(input, join(folder, 'hard.xyz'));
+    const outputs = ['in.xyz', './in.xyz', `../${folder.split('/').pop()}/in.xyz`, input, 'soft.xyz', 'hard.xyz'];
+    for (const out of outputs) {
+      const r = await cli(['inspect', 'in.xyz', '--json', '-o', out], { cwd: folder });
+      expect(r.stderr).toBe(`conformark: ${out}: is an input of this run; refusing to overwrite it\n`);
+      expect(r.status).toBe(2);
+    }
+    const viaLink = await cli(['newman', 'soft.xyz', '--bond', '1-2', '--json', '-o', 'in.xyz'], { cwd: folder });
+    expect(viaLink.status).toBe(2);
+    expect(readFileSync(input)).toEqual(bytes);
+    expect(readdirSync(folder).sort()).toEqual(['hard.xyz', 'in.xyz', 'soft.xyz']);
+  });
+
+  it('conformark -o a folder, or a path through a file, is a one-line error', async () => {
+    const { folder, out } = sentinelIn('folder-out');
+    const water = 'test/data/good-water.sdf';
+    const intoFolder = await cli(['inspect', water, '-o', folder]);
+    expect(intoFolder.stderr).toBe(`conformark: ${folder}: is a folder; give a file name to write to\n`);
+    const throughFile = await cli(['inspect', water, '-o', join(out, 'x.txt')]);
+    expect(throughFile.stderr).toBe(`conformark: ${join(out, 'x.txt')}: cannot write: a part of the path is not a folder\n`);
+    expect(throughFile.status).toBe(2);
+    expectUntouched(folder, out);
+  });
+
+  it('conformark batch and ensemble -d into the folder that holds the input write beside it and keep it', async () => {
+    const folder = mkdtempSync(join(dir, 'beside-'));
+    const input = join(folder, 'frames.xyz');
+    writeFileSync(input, degenerateXyz());
+    const bytes = readFileSync(input);
+    const batch = await cli(['batch', input, '-d', folder, '--tables', 'csv']);
+    expect(batch.status).toBe(0);
+    const ensemble = await cli(['ensemble', input, '-d', folder, '--json']);
+    expect(ensemble.status).toBe(0);
+    expect(readFileSync(input)).toEqual(bytes);
+    expect(readdirSync(folder)).toContain('manifest.json');
+  });
+});
+
+describe('conformark on degenerate geometry', () => {
+  let input = '';
+  beforeAll(() => {
+    input = join(dir, 'degenerate.xyz');
+    writeFileSync(input, degenerateXyz());
+  });
+
+  const RUNS: readonly (readonly string[])[] = [
+    ['inspect', '--json'],
+    ['inspect'],
+    ['ensemble', '--json'],
+    ['newman', '--bond', '2-3', '--record', '1'],
+    ['newman', '--bond', '2-3', '--record', '1', '--json'],
+    ['newman', '--bond', '1-2', '--record', '2', '--couplings'],
+    ['newman', '--bond', '1-2', '--record', '3', '--json', '--couplings'],
+    ['newman', '--bond', '1-2', '--record', '4'],
+    ['newman', '--bond', '1-2', '--record', '5', '--json'],
+    ['chair', '--record', '2'],
+    ['chair', '--record', '3', '--json'],
+    ['chair', '--record', '4', '--view', 'projected'],
+  ];
+
+  it.each(RUNS)('conformark %s … writes no NaN, Infinity or undefined and says what is wrong', async (command, ...rest) => {
+    const r = await cliInProcess([command!, input, ...rest]);
+    expect(r.status).toBe(0);
+    expect(r.stdout).not.toMatch(LEAK);
+    expect(r.stdout).not.toMatch(UNSAFE_SVG);
+    if (rest.includes('--json')) expect(() => JSON.parse(r.stdout)).not.toThrow();
+    for (const line of r.stderr.split('\n').filter(Boolean)) expect(line).toMatch(/^conformark: (warning: |wrote )/);
+  });
+
+  it('conformark newman on collinear torsion atoms warns that the azimuth is undefined', async () => {
+    const r = await cliInProcess(['newman', input, '--bond', '2-3', '--record', '1', '--json']);
+    expect(r.stderr).toContain('conformark: warning: the bond C2-H1 lies on the C2-C3 axis: its azimuth and torsions are undefined');
+    expect(r.stdout).not.toMatch(LEAK);
+  });
+
+  it('conformark batch on degenerate geometry writes clean figures, tables and manifest', async () => {
+    const out = mkdtempSync(join(dir, 'batch-degenerate-'));
+    const r = await cli(['batch', input, '-d', out]);
+    expect(r.status).toBe(0);
+    expect(r.stderr).toContain('is nearly planar (Q 0.000 Å): phase and ring form are undefined');
+    for (const file of readdirSync(out)) {
+      const text = readFileSync(join(out, file), 'utf8');
+      expect(text, file).not.toMatch(LEAK);
+      expect(text, file).not.toMatch(UNSAFE_SVG);
+    }
+  });
+});
