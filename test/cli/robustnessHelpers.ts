@@ -23,11 +23,43 @@ export function cli(args: readonly string[], options: { input?: string | Buffer;
   });
 }
 
-/** Non-finite numbers or missing values leaking into JSON or SVG output. */
-export const LEAK = /\bNaN\b|-?Infinity|="undefined"|>undefined<|: undefined\b|="null"|"\s*:\s*"NaN"/;
+/**
+ * Non-finite numbers or missing values leaking into an output, as a list of findings (empty when clean).
+ * JSON: anything outside string literals (text copied from the input may say "NaN"); SVG: attribute values
+ * and the whole text; other text (tables, CSV, LaTeX, terminal): the whole text.
+ */
+export function leaks(text: string): string[] {
+  const bad = /\bNaN\b|-?Infinity|\bundefined\b/g;
+  const head = text.trimStart()[0];
+  if (head === '{' || head === '[') return text.replace(/"(?:[^"\\]|\\.)*"/g, '""').match(bad) ?? [];
+  if (head === '<') {
+    const found = [...text.matchAll(/\s([\w:-]+)="([^"]*)"/g)].filter(([, , v]) => /\b(?:NaN|Infinity|undefined|null)\b/.test(v!)).map(([m]) => m.trim());
+    return [...found, ...(text.match(/\bNaN\b|-?Infinity/g) ?? [])];
+  }
+  return text.match(/\bNaN\b|-?Infinity|[^a-z ]undefined|undefined[^\s.,;:)]/g) ?? [];
+}
 
-/** Markup that must never appear in any figure. */
-export const UNSAFE_SVG = /<script|<foreignObject|\son[a-z]+\s*=|(?:xlink:)?href\s*=\s*["'](?!#)|javascript:|<!ENTITY|<!\[CDATA\[/i;
+/** Elements that must never appear in a figure: scripts, HTML islands, embedded or external content. */
+const FORBIDDEN_TAGS = /^(script|foreignobject|iframe|object|embed|image|use|style|a|animate|set|handler|listener)$/i;
+
+/**
+ * Unsafe markup in an SVG or HTML text, as a list of findings (empty when safe): forbidden elements, event
+ * attributes (`on*=`), any non-fragment href, `url(`/`javascript:` in attribute values, DTDs, entities and
+ * CDATA sections. Text content is not inspected: markup characters there are escaped, so it is inert.
+ */
+export function unsafeMarkup(svg: string): string[] {
+  const found: string[] = [];
+  if (/<!DOCTYPE|<!ENTITY|<!\[CDATA\[/i.test(svg)) found.push('DTD, entity or CDATA section');
+  for (const [, name, attrs] of svg.matchAll(/<([A-Za-z][\w:.-]*)((?:\s+[^\s=>]+\s*=\s*(?:"[^"]*"|'[^']*'))*)\s*\/?>/g)) {
+    if (FORBIDDEN_TAGS.test(name!)) found.push(`<${name}>`);
+    for (const [, attr, value] of attrs!.matchAll(/\s([^\s=]+)\s*=\s*(?:"([^"]*)"|'([^']*)')/g)) {
+      if (/^on/i.test(attr!)) found.push(`${name} ${attr}=`);
+      if (/href$/i.test(attr!) && !(value ?? '').startsWith('#')) found.push(`${name} ${attr}="${value}"`);
+      if (/url\(|javascript:|expression\(/i.test(value ?? '')) found.push(`${name} ${attr}="${value}"`);
+    }
+  }
+  return found;
+}
 
 type P = readonly [number, number, number];
 
