@@ -3,6 +3,7 @@ import type { Command } from 'commander';
 import { registerBuild } from './build.js';
 import { registerInspect } from './inspect.js';
 import { registerNewman } from './newman.js';
+import { registerTrajectory } from './trajectory.js';
 
 export type RegisterCommand = (program: Command) => void;
 
@@ -11,4 +12,5 @@ export const COMMANDS = new Map<string, RegisterCommand>([
   ['inspect', registerInspect],
   ['newman', registerNewman],
   ['build', registerBuild],
+  ['trajectory', registerTrajectory],
 ]);
