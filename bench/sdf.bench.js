@@ -15,7 +15,7 @@ function generate() {
   const smiles = ['OCC1OC(O)C(O)C(O)C1O', 'CC1CCCCC1C(C)C', 'c1ccccc1CCN', 'CC(=O)OC1CCCC1', 'OC1CCOCC1'];
   const blocks = [];
   for (const s of smiles) {
-    const gen = new ConformerGenerator(11, false);
+    const gen = new ConformerGenerator(11);
     gen.initializeConformers(Molecule.fromSmiles(s), {});
     for (let k = 0; k < 8; k++) {
       const c = gen.getNextConformerAsMolecule();

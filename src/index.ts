@@ -40,6 +40,7 @@ export {
 export type { HaasnootParameters, HaasnootSet, HaasnootTerm } from './analysis/haasnoot.js';
 export {
   COUPLING_METHODS,
+  COUPLING_METHOD_NAMES,
   couplingsAcrossBond,
   isSkippedCoupling,
   ringCouplings,
@@ -167,6 +168,23 @@ export type { Energy, EnergyOptions, FoundEnergy } from './io/energy.js';
 export { formatXyz } from './io/formatXyz.js';
 export type { FormatXyzOptions } from './io/formatXyz.js';
 export { parseXyzComment } from './io/xyzComment.js';
+// chair (area G): chair template and projected ring figures
+export { ringViewFrame, projectPoint, shoelaceArea, checkElevation } from './layout/ringView.js';
+export type { RingViewFrame, ViewPoint } from './layout/ringView.js';
+export { toPlacementJson, DEFAULT_ELEVATION_DEG } from './layout/ringPlacement.js';
+export type { RingPlacement, PlacedBond, PlacementJson, RingView, RingHydrogens } from './layout/ringPlacement.js';
+export { chairTemplate, assertChair, ringName, TEMPLATE_ELEVATION_DEG } from './layout/chairTemplate.js';
+export type { ChairTemplateOptions } from './layout/chairTemplate.js';
+export { ringProjection } from './layout/ringProjection.js';
+export type { RingProjectionOptions } from './layout/ringProjection.js';
+export { ringCaption, descriptorRuns, ringTitle, ringDescription } from './layout/ringCaption.js';
+export type { CaptionRun } from './layout/ringCaption.js';
+export { groupText } from './layout/ringLabels.js';
+export type { RingLabels } from './layout/ringLabels.js';
+export { layoutRing } from './layout/ringLayout.js';
+export type { RingLayoutOptions } from './layout/ringLayout.js';
+export { chairFigure } from './api/chair.js';
+export type { ChairFigure, ChairFigureOptions } from './api/chair.js';
 // trajectory (area I)
 export { analyzeTrajectory } from './api/trajectory.js';
 export type { TrajectoryOptions, TrajectorySummary } from './api/trajectory.js';

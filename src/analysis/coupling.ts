@@ -17,6 +17,13 @@ export type CouplingMethod = 'haasnoot-1980' | KarplusMethod;
 /** Every accepted `method` name. */
 export const COUPLING_METHODS: readonly CouplingMethod[] = ['haasnoot-1980', ...KARPLUS_FORMS.keys()];
 
+/** How each equation is named in figures and tables. */
+export const COUPLING_METHOD_NAMES: ReadonlyMap<CouplingMethod, string> = new Map<CouplingMethod, string>([
+  ['haasnoot-1980', 'Haasnoot–de Leeuw–Altona (1980)'],
+  ['karplus-1959', 'Karplus (1959)'],
+  ['karplus-1963', 'Karplus (1963)'],
+]);
+
 /** Options for the coupling calls. */
 export interface CouplingOptions {
   /** Equation to use. Default `'haasnoot-1980'`. */

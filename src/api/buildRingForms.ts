@@ -1,12 +1,13 @@
 /**
  * Private to `build`: start geometries for the six-ring forms a plain conformer search misses, made by the
- * inverse Cremer–Pople formula (METHODS.md §2.1 step 8), and a minimal shape label for the minimised result.
- * Area C writes the full ring-shape classifier; `sixRingShape` here only tells chairs, boats and twist-boats
- * apart to name and de-duplicate what `build` made, and may be swapped for it.
+ * inverse Cremer–Pople formula (METHODS.md §2.1 step 8), and the shape of the minimised result (the same
+ * classifier `inspect` uses, so `build` and `inspect` always agree on what a form is called).
  */
 import type { Vec3 } from '../model/molecule.js';
 import { cremerPople, displacementsFromModes, meanPlane, sixRingModes } from '../geometry/cremerPople.js';
 import { add, cross, dot, scale, sub, unit } from '../geometry/vec3.js';
+import { classifyRing } from '../analysis/ringShape.js';
+import type { RingShape } from '../analysis/ringForms.js';
 
 /** One ring form to build: a target on the Cremer–Pople sphere. */
 export interface RingTarget {
@@ -18,8 +19,10 @@ export interface RingTarget {
   readonly Q: number;
 }
 
-/** Minimal six-ring shape label; `planar` below Q = 0.1 Å (METHODS.md §2.3, common practice, no source). */
-export type SixRingShape = 'chair' | 'boat' | 'twist-boat' | 'puckered' | 'planar';
+/** Six-ring shape label, as `classifyRing` gives it. */
+export type SixRingShape = RingShape;
+
+const SIX_LOCANTS = ['1', '2', '3', '4', '5', '6'];
 
 /** Q of the boat and twist-boat starts: the model value of METHODS.md §2.4 (derived), Å. */
 const BOAT_Q = 0.76;
@@ -143,14 +146,7 @@ export function sixRingShape(coords: Float64Array, ring: readonly number[]): {
   const p = cremerPople(ring.map((i) => point(coords, i)));
   if (!p || p.thetaDeg === null) return { shape: 'planar', thetaDeg: null, phiDeg: null, Q: 0 };
   const { Q, thetaDeg, phiDeg } = p;
-  let shape: SixRingShape = 'puckered';
-  if (Q < 0.1) shape = 'planar';
-  else if (thetaDeg < 30 || thetaDeg > 150) shape = 'chair';
-  else if (thetaDeg >= 60 && thetaDeg <= 120 && phiDeg !== null) {
-    const offset = Math.abs(((phiDeg % 60) + 60) % 60 - 30); // 30 at a boat, 0 at a twist-boat
-    shape = offset > 15 ? 'boat' : 'twist-boat';
-  }
-  return { shape, thetaDeg, phiDeg, Q };
+  return { shape: classifyRing(p, SIX_LOCANTS).shape, thetaDeg, phiDeg, Q };
 }
 
 /** Ring atoms in bonded order, starting from the lowest index and walking towards its lower-numbered neighbour. */

@@ -53,9 +53,8 @@ export function ringShapes(coords: Float64Array, rings: readonly (readonly numbe
   return rings.map((ring) => sixRingShape(coords, ring).shape);
 }
 
-const THE: Record<SixRingShape, string> = {
-  chair: 'a chair', boat: 'a boat', 'twist-boat': 'a twist-boat', puckered: 'a puckered form', planar: 'a flat ring',
-};
+/** "a chair", "an envelope": the shape with its article, for notes. */
+const the = (shape: SixRingShape): string => `${/^[aeiou]/.test(shape) ? 'an' : 'a'} ${shape}`;
 
 /** Adds the distinct ring forms of every saturated six-ring of `kept[0]` to `kept`; notes say what happened. */
 export function addRingForms(ctx: BuildContext, kept: Candidate[]): void {
@@ -81,10 +80,10 @@ export function addRingForms(ctx: BuildContext, kept: Candidate[]): void {
         const start = `${target.kind} start (theta ${target.thetaDeg.toFixed(0)}${phi})`;
         const candidate: Candidate = {
           coords: found.coords, energy: found.energy, fromSearch: false, shapes,
-          origin: `${label}: ${start}${found.nudged ? ', nudged off the boat,' : ''} minimised to ${THE[form]}`,
+          origin: `${label}: ${start}${found.nudged ? ', nudged off the boat,' : ''} minimised to ${the(form)}`,
         };
         const meant = target.kind === 'flipped-chair' ? 'chair' : target.kind;
-        outcome = form === meant ? `stayed ${THE[form]}` : `relaxed to ${THE[form]}`;
+        outcome = form === meant ? `stayed ${the(form)}` : `relaxed to ${the(form)}`;
         if (found.nudged) outcome = `stopped at the boat (a saddle point) and, nudged, ${outcome}`;
         if (!kept.some((k) => ctx.isDuplicate(k, candidate))) {
           kept.push(candidate);

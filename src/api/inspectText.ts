@@ -1,5 +1,6 @@
 /** The readable per-record summary `conformark inspect` prints (the JSON report, laid out for a terminal). */
 import type { RecordReport } from '../analysis/recordReport.js';
+import { COUPLING_METHOD_NAMES } from '../analysis/coupling.js';
 import type { ReportRing } from '../analysis/ringReport.js';
 import type { InspectReport } from './inspect.js';
 
@@ -34,7 +35,8 @@ function recordText(record: RecordReport): string {
   const lines = [`record ${record.index}${record.title ? `  "${record.title}"` : ''}`, `  ${facts.join(' · ')}`];
   for (const ring of record.rings) lines.push(...ringText(record, ring));
   if (record.couplings && record.couplings.length > 0) {
-    lines.push(`  ³J(H,H) predictions (${record.couplings[0]!.method}; estimates, typical error about 1 Hz)`);
+    const method = record.couplings[0]!.method;
+    lines.push(`  ³J(H,H) predictions, ${COUPLING_METHOD_NAMES.get(method) ?? method} (estimates, typical error about 1 Hz)`);
     for (const c of record.couplings) {
       const pair = `${atomLabel(record, c.front)}–${atomLabel(record, c.back)}`;
       lines.push(`    ring ${c.ring}  ${pair.padEnd(14)} ${c.jHz.toFixed(1).padStart(5)} Hz   H–C–C–H ${signed(c.torsionDeg)}°`);

@@ -3,6 +3,7 @@ import type { Molecule } from '../model/molecule.js';
 import { usageError, type Warning } from '../model/errors.js';
 import { buildGraph, type Graph } from '../perceive/graph.js';
 import { newmanView, type NewmanView } from '../analysis/newman.js';
+import { couplingsAcrossBond, isSkippedCoupling, type Coupling, type CouplingOptions } from '../analysis/coupling.js';
 import { layoutNewman, type NewmanLayoutOptions } from '../layout/newmanLayout.js';
 import type { Scene } from '../layout/scene.js';
 import type { Theme } from '../render/theme.js';
@@ -11,7 +12,12 @@ import { measureText } from '../render/svgWindow.js';
 import { renderSvg } from '../render/renderSvg.js';
 
 /** Options of {@link newmanFigure}. Atom indices are 0-based. */
-export interface NewmanFigureOptions extends Omit<NewmanLayoutOptions, 'metrics' | 'measure'> {
+export interface NewmanFigureOptions extends Omit<NewmanLayoutOptions, 'metrics' | 'measure' | 'couplings'> {
+  /**
+   * Print predicted ³J(H,H) for every H/H pair across the bond: `true` for the default equation
+   * (Haasnoot–de Leeuw–Altona 1980), or coupling options. Default false.
+   */
+  readonly couplings?: boolean | CouplingOptions;
   /** The bond, [front, back]: the viewer looks from front to back. Required. */
   readonly bond: readonly [number, number];
   /** Front substituent pointing up. Default: the ring neighbour for ring bonds, else the heaviest. */
@@ -32,6 +38,8 @@ export interface NewmanFigure {
   readonly view: NewmanView;
   readonly scene: Scene;
   readonly warnings: readonly Warning[];
+  /** Predicted couplings across the bond (empty unless asked for). */
+  readonly couplings: readonly Coupling[];
 }
 
 /**
@@ -43,9 +51,14 @@ export function newmanFigure(mol: Molecule, options: NewmanFigureOptions): Newma
   const [front, back] = options.bond;
   const view = newmanView(mol, graph, front, back, { up: options.up, rings: options.rings });
   const theme = loadTheme(options.theme);
-  const scene = layoutNewman(view, mol, { ...options, metrics: sceneMetrics(theme), measure: measureText });
+  const couplings = options.couplings
+    ? couplingsAcrossBond(mol, graph, front, back, options.couplings === true ? {} : options.couplings).filter(
+        (c): c is Coupling => !isSkippedCoupling(c),
+      )
+    : [];
+  const scene = layoutNewman(view, mol, { ...options, couplings, metrics: sceneMetrics(theme), measure: measureText });
   const svg = renderSvg(scene, theme, { idPrefix: options.idPrefix });
-  return { svg, view, scene, warnings: view.warnings };
+  return { svg, view, scene, warnings: [...view.warnings, ...couplings.flatMap((c) => c.warnings)], couplings };
 }
 
 function graphOf(mol: Molecule): Graph {

@@ -12,8 +12,8 @@ import { XyzConsumer } from './xyz.js';
 
 /** What a consumer factory may be given beyond file, limits and sink. */
 export interface ConsumerExtras {
-  /** XYZ: reuse one coordinate buffer across frames of equal size. */
-  readonly reuseCoords?: boolean;
+  /** XYZ: coordinate buffers given back by the caller, reused for frames of equal size. */
+  readonly pool?: Float64Array[];
   /** PDB: the file's CONECT records, scanned beforehand, so models can be streamed. */
   readonly conect?: readonly Conect[];
 }
@@ -39,7 +39,7 @@ export const FORMATS: ReadonlyMap<FormatName, FormatSpec> = new Map<FormatName, 
         const atom = lines[first + 2];
         return atom !== undefined && /^\s*[A-Za-z]{1,2}\d*\s+\S+\s+\S+\s+\S+/.test(atom) ? 3 : 1;
       },
-      consumer: (file, limits, emit, extras) => new XyzConsumer(file, limits, emit, { reuseCoords: extras.reuseCoords }),
+      consumer: (file, limits, emit, extras) => new XyzConsumer(file, limits, emit, { pool: extras.pool }),
     },
   ],
   [

@@ -1,9 +1,9 @@
 /**
  * The cheap path for trajectories: coordinates, title and properties of each frame, without the rest of a
- * `Molecule`. With `reuse`, XYZ frames of equal size are written into one buffer: each yielded `coords` is
- * valid only until the next frame is requested (copy it to keep it).
+ * `Molecule`. With `reuse`, XYZ frames recycle the coordinate buffers of frames already consumed: each
+ * yielded `coords` is valid only until the next frame is requested (copy it to keep it).
  */
-import { readRecordsSettled, type StreamOptions } from './readRecords.js';
+import { settledBatches, type StreamOptions } from './readRecords.js';
 
 /** One frame. */
 export interface Frame {
@@ -29,11 +29,24 @@ export interface FrameOptions extends StreamOptions {
  * @example for await (const f of readFrames('md.xyz.gz', { reuse: true })) puckerOf(f.coords)
  */
 export async function* readFrames(path: string, options: FrameOptions = {}): AsyncGenerator<Frame> {
-  for await (const r of readRecordsSettled(path, options, { reuseCoords: options.reuse === true })) {
-    if (r.ok) {
-      const m = r.molecule;
-      yield { index: m.source.index, line: m.source.line, coords: m.coords, title: m.title, properties: m.properties };
-    } else if (r.fatal || !options.onError) throw r.error;
-    else options.onError(r.error);
+  const pool: Float64Array[] | undefined = options.reuse === true ? [] : undefined;
+  for await (const batch of settledBatches(path, options, { pool })) {
+    for (const r of batch) {
+      if (r.ok) {
+        const m = r.molecule;
+        yield {
+          index: m.source.index,
+          line: m.source.line,
+          coords: m.coords,
+          title: m.title,
+          get properties() {
+            return m.properties;
+          },
+        };
+        // the caller asked for the next frame: this one's buffer is free again
+        if (pool && pool.length < 100_000) pool.push(m.coords);
+      } else if (r.fatal || !options.onError) throw r.error;
+      else options.onError(r.error);
+    }
   }
 }

@@ -24,7 +24,8 @@ export interface StreamOptions extends ReadOptions {
 
 /** Internal knobs for `readFrames`. */
 export interface StreamExtras {
-  readonly reuseCoords?: boolean;
+  /** Coordinate buffers the caller is done with; XYZ frames of the same size reuse them. */
+  readonly pool?: Float64Array[];
 }
 
 /**
@@ -32,11 +33,19 @@ export interface StreamExtras {
  * count line, SDF after `$$$$`, PDB at the next MODEL). A fatal problem is yielded last.
  * @example for await (const r of readRecordsSettled('big.sdf.gz')) if (!r.ok) console.error(r.error.message)
  */
-export async function* readRecordsSettled(
+export async function* readRecordsSettled(path: string, options: ReadOptions = {}): AsyncGenerator<Settled> {
+  for await (const batch of settledBatches(path, options)) yield* batch;
+}
+
+/**
+ * The engine behind the streaming readers: outcomes in batches (one per input chunk, so the per-record
+ * cost of async iteration is paid once per chunk). A yielded array is not reused.
+ */
+export async function* settledBatches(
   path: string,
   options: ReadOptions = {},
   extras: StreamExtras = {},
-): AsyncGenerator<Settled> {
+): AsyncGenerator<Settled[]> {
   const limits = resolveLimits(options);
   const chunks = openInput(path);
   const queue: Settled[] = [];
@@ -59,10 +68,10 @@ export async function* readRecordsSettled(
         const line = batch[k]!;
         if (blank && line.trim() !== '') blank = false;
         consumer.feed(line, first + k);
-        if (queue.length > 0) {
-          count += queue.length;
-          yield* queue.splice(0);
-        }
+      }
+      if (queue.length > 0 && !fatal) {
+        count += queue.length;
+        yield queue.splice(0);
       }
       if (fatal || done) break;
       first = splitter.lastLine + 1;
@@ -80,8 +89,8 @@ export async function* readRecordsSettled(
     await chunks.return(undefined);
   }
   count += queue.length;
-  yield* queue.splice(0);
-  if (count === 0) yield { ok: false, error: new ParseError(emptyInputIssue(path, blank)), fatal: true };
+  if (queue.length > 0) yield queue.splice(0);
+  if (count === 0) yield [{ ok: false, error: new ParseError(emptyInputIssue(path, blank)), fatal: true }];
 }
 
 /**
@@ -90,10 +99,12 @@ export async function* readRecordsSettled(
  * @example for await (const mol of readRecords('conformers.sdf')) console.log(mol.title)
  */
 export async function* readRecords(path: string, options: StreamOptions = {}): AsyncGenerator<Molecule> {
-  for await (const r of readRecordsSettled(path, options)) {
-    if (r.ok) yield r.molecule;
-    else if (r.fatal || !options.onError) throw r.error;
-    else options.onError(r.error);
+  for await (const batch of settledBatches(path, options)) {
+    for (const r of batch) {
+      if (r.ok) yield r.molecule;
+      else if (r.fatal || !options.onError) throw r.error;
+      else options.onError(r.error);
+    }
   }
 }
 
@@ -116,6 +127,6 @@ async function readHead(
 
 /** PDB files (not standard input) get their CONECT records scanned first, so models can be streamed. */
 async function consumerExtras(path: string, format: FormatName, limits: ReadLimits, extras: StreamExtras): Promise<ConsumerExtras> {
-  if (format !== 'pdb' || path === '-') return { reuseCoords: extras.reuseCoords };
-  return { reuseCoords: extras.reuseCoords, conect: await scanConect(path, limits) };
+  if (format !== 'pdb' || path === '-') return { pool: extras.pool };
+  return { pool: extras.pool, conect: await scanConect(path, limits) };
 }

@@ -7,15 +7,18 @@
 import type { Atom, Molecule } from '../model/molecule.js';
 import type { ReadLimits } from './limits.js';
 import { elementSymbol, isLabel } from './elementSymbol.js';
-import { fieldEnd, scanCount, scanFloat, skipBlank } from './numbers.js';
+import { cursor, fieldEnd, scanCount, scanFloat, scanNumberAt, skipBlank } from './numbers.js';
 import { findOverlap, overlapMessage } from './overlap.js';
 import { failure, issue, quote, type Emit, type LineConsumer } from './sink.js';
 import { parseXyzComment } from './xyzComment.js';
 
 /** Options of the XYZ consumer beyond the limits. */
 export interface XyzConsumerOptions {
-  /** Write every frame into the same coordinate buffer when the atom count repeats (frame streaming). */
-  readonly reuseCoords?: boolean;
+  /**
+   * Coordinate buffers handed back by the reader's user (frame streaming): a frame of matching size takes
+   * one instead of allocating.
+   */
+  readonly pool?: Float64Array[];
 }
 
 const enum State {
@@ -38,7 +41,7 @@ export class XyzConsumer implements LineConsumer {
   /** Frames started so far (count lines read). */
   private frame = 0;
   private title = '';
-  private coords = new Float64Array(0);
+  private coords: Float64Array = new Float64Array(0);
   private atoms: Atom[] = [];
   private prevAtoms: readonly Atom[] = [];
   private prevTokens: string[] = [];
@@ -106,7 +109,9 @@ export class XyzConsumer implements LineConsumer {
       const message = `count line says ${shown} atoms; the limit is ${this.limits.maxAtoms} (option maxAtoms)`;
       return this.fail('too-many-atoms', lineNo, message, State.Resync);
     }
-    if (!(this.options.reuseCoords && this.coords.length === 3 * n)) this.coords = new Float64Array(3 * n);
+    const pool = this.options.pool;
+    const spare = pool !== undefined && pool.length > 0 && pool[pool.length - 1]!.length === 3 * n ? pool.pop() : undefined;
+    this.coords = spare ?? new Float64Array(3 * n);
     this.sameAsPrev = this.prevAtoms.length === n;
     this.atoms = this.sameAsPrev ? [] : new Array<Atom>(n);
     this.state = State.Comment;
@@ -117,6 +122,21 @@ export class XyzConsumer implements LineConsumer {
     const s = skipBlank(line, 0);
     const e = fieldEnd(line, s);
     const coords = this.coords;
+    const x = scanNumberAt(line, e);
+    const y = scanNumberAt(line, cursor.end);
+    const z = scanNumberAt(line, cursor.end);
+    // x - x is NaN for NaN and ±Infinity alike: one test for the three coordinates
+    if (x - x + (y - y) + (z - z) !== 0) return this.badCoordinates(line, lineNo, s, e);
+    coords[3 * k] = x;
+    coords[3 * k + 1] = y;
+    coords[3 * k + 2] = z;
+    if (!this.atomName(line, s, e, k, lineNo)) return;
+    this.found = k + 1;
+    if (this.found === this.count) this.finish();
+  }
+
+  /** Slow path: says which field of an atom line is missing, not a number or not finite. */
+  private badCoordinates(line: string, lineNo: number, s: number, e: number): void {
     let p = e;
     for (let axis = 0; axis < 3; axis++) {
       const a = skipBlank(line, p);
@@ -127,11 +147,7 @@ export class XyzConsumer implements LineConsumer {
         const what = Number.isNaN(v) ? 'is not a number' : 'is not finite';
         return this.badAtom(lineNo, `${AXES[axis]} coordinate ${quote(line.slice(a, p))} ${what}`, 'bad-number');
       }
-      coords[3 * k + axis] = v;
     }
-    if (!this.atomName(line, s, e, k, lineNo)) return;
-    this.found = k + 1;
-    if (this.found === this.count) this.finish();
   }
 
   /** A line with fewer than four fields: the frame ended early (blank or next count line) or is broken. */
@@ -175,12 +191,17 @@ export class XyzConsumer implements LineConsumer {
     }
     this.prevAtoms = atoms;
     this.prevTokens.length = n;
+    const title = this.title;
+    let properties: Readonly<Record<string, string>> | null = null;
     const molecule: Molecule = {
-      title: this.title,
+      title,
       atoms,
       coords: this.coords,
       bonds: null,
-      properties: parseXyzComment(this.title),
+      // parsed on first use: a trajectory reader rarely needs the comment's key=value pairs
+      get properties() {
+        return (properties ??= parseXyzComment(title));
+      },
       source: { file: this.file, format: 'xyz', index: this.frame, line: this.start },
     };
     this.emit({ ok: true, molecule });

@@ -13,7 +13,7 @@ import { atomLabelText, boxAt, rayCandidates, textBox, type NewmanLabels } from 
 import { firstFree, grow, type Box, type Obstacles } from './labelPlacement.js';
 import { torsionArcPath, torsionArcPoints } from './torsionArc.js';
 import { approximateMeasure, DEFAULT_METRICS, textStyle, type Scene, type SceneItem, type SceneMetrics, type TextMeasure } from './scene.js';
-import { newmanCaption, newmanDescription, torsionText } from './newmanText.js';
+import { couplingLines, newmanCaption, newmanDescription, torsionText } from './newmanText.js';
 
 /** How hydrogens are drawn: with labels, not at all, or as short unlabelled stubs (`collapse`). */
 export type NewmanHydrogens = 'show' | 'hide' | 'collapse';
@@ -36,6 +36,16 @@ export interface NewmanLayoutOptions {
   readonly measure?: TextMeasure;
   /** Smallest drawn front/back offset in `ideal` mode, degrees. Default 8. */
   readonly eclipsedOffsetDeg?: number;
+  /** Predicted ³J(H,H) per front/back proton pair (0-based atoms), printed under the caption. Default none. */
+  readonly couplings?: readonly NewmanCouplingLabel[];
+}
+
+/** One coupling to print: protons on the front and back atoms, J in Hz, and the equation's name. */
+export interface NewmanCouplingLabel {
+  readonly front: number;
+  readonly back: number;
+  readonly jHz: number;
+  readonly method: string;
 }
 
 const FRONT_END = 1.45;
@@ -156,15 +166,18 @@ export function layoutNewman(view: NewmanView, mol: Molecule, options: NewmanLay
   for (const b of textBoxes.map((bx) => grow(bx, metrics.lineWidth))) {
     x0 = Math.min(x0, b.x0); x1 = Math.max(x1, b.x1); y0 = Math.min(y0, b.y0); y1 = Math.max(y1, b.y1);
   }
-  const captionLines = caption ? newmanCaption(view, mol, marks, angles) : [];
+  const captionLines = [
+    ...(caption ? newmanCaption(view, mol, marks, angles) : []).map((text) => ({ text, role: 'caption' })),
+    ...couplingLines(view, mol, options.couplings ?? []).map((text) => ({ text, role: 'coupling-label' })),
+  ];
   const capStyle = textStyle(metrics, 'caption');
   const capTop = y1 + Math.max(metrics.gap * 2, capStyle.fontSize * 0.7);
-  captionLines.forEach((line, k) => {
+  captionLines.forEach(({ text: line, role }, k) => {
     const t = textBox(line, capStyle, measure);
     const cy = capTop + t.height / 2 + k * capStyle.fontSize * 1.3;
     const box = boxAt(0, cy, t);
     x0 = Math.min(x0, box.x0); x1 = Math.max(x1, box.x1); y1 = Math.max(y1, box.y1 + capStyle.fontSize * 0.22);
-    items.push({ type: 'text', role: 'caption', x: 0, y: cy + t.baseline, text: line, anchor: 'middle', fontSize: capStyle.fontSize, fontWeight: capStyle.fontWeight });
+    items.push({ type: 'text', role, x: 0, y: cy + t.baseline, text: line, anchor: 'middle', fontSize: capStyle.fontSize, fontWeight: capStyle.fontWeight });
   });
   const dx = metrics.margin - x0;
   const dy = metrics.margin - y0;

@@ -1,6 +1,7 @@
 /** Words of a Newman figure: torsion values, caption lines and the SVG description. */
 import type { Molecule } from '../model/molecule.js';
 import type { NewmanView } from '../analysis/newman.js';
+import { COUPLING_METHOD_NAMES, type CouplingMethod } from '../analysis/coupling.js';
 import type { NewmanAngles } from './newmanAngles.js';
 
 const MINUS = '\u2212';
@@ -37,4 +38,19 @@ export function newmanDescription(view: NewmanView, mol: Molecule, marks: readon
     ...marks.map(([x, y]) => `${pairLine(view, mol, x, y)}.`),
   ];
   return parts.join(' ');
+}
+
+/** Lines `³J(H7,H12) 12.8 Hz (−176°)` for each predicted coupling, in the order given, plus the method. */
+export function couplingLines(
+  view: NewmanView,
+  mol: Molecule,
+  couplings: readonly { front: number; back: number; jHz: number; method: string }[],
+): string[] {
+  if (couplings.length === 0) return [];
+  const lines = couplings.map((c) => {
+    const p = view.pairs.find((q) => q.front === c.front && q.back === c.back);
+    return `³J(${id(mol, c.front)},${id(mol, c.back)}) ${c.jHz.toFixed(1)} Hz (${torsionText(p?.torsionDeg ?? null)})`;
+  });
+  const method = couplings[0]!.method;
+  return [...lines, `predicted: ${COUPLING_METHOD_NAMES.get(method as CouplingMethod) ?? method} (estimates)`];
 }

@@ -83,9 +83,10 @@ describe('boltzmannPopulations', () => {
 });
 
 describe('convertEnergy', () => {
-  it('convertEnergy uses 4.184 kJ/kcal, 627.509474 kcal/mol per hartree and 23.0605 kcal/mol per eV (hartree and eV factors from memory)', () => {
+  it('convertEnergy uses 4.184 kJ/kcal and the CODATA 2018 hartree and eV (Tiesinga et al. 2021, Rev. Mod. Phys. 93, 025010)', () => {
     expect(convertEnergy(1, 'kcal/mol', 'kJ/mol')).toBeCloseTo(4.184, 12);
-    expect(convertEnergy(1, 'hartree', 'kcal/mol')).toBeCloseTo(627.509474, 9);
+    expect(convertEnergy(1, 'hartree', 'kcal/mol')).toBeCloseTo(2625.4996394799 / 4.184, 9);
+    expect(convertEnergy(1, 'hartree', 'kcal/mol')).toBeCloseTo(627.509474, 6);
     expect(convertEnergy(1, 'eV', 'kcal/mol')).toBeCloseTo(23.0605, 4);
     expect(convertEnergy(convertEnergy(3.7, 'eV', 'hartree'), 'hartree', 'eV')).toBeCloseTo(3.7, 12);
   });

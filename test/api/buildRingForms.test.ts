@@ -37,10 +37,10 @@ describe('reshapeRing', () => {
 });
 
 describe('sixRingShape', () => {
-  it('sixRingShape names ideal chairs, boats and twist-boats (METHODS.md §3.3, derived)', () => {
+  it('sixRingShape names ideal chairs, boats, twist-boats and half-chairs (METHODS.md §3.3, derived)', () => {
     const shape = (t: number, p: number) => sixRingShape(ringWithSubstituent(t, p, [0, 0, 1]), ring).shape;
     expect([shape(0, 0), shape(180, 0), shape(90, 0), shape(90, 30), shape(90, 240), shape(45, 30)]).toEqual([
-      'chair', 'chair', 'boat', 'twist-boat', 'boat', 'puckered',
+      'chair', 'chair', 'boat', 'twist-boat', 'boat', 'half-chair',
     ]);
   });
 

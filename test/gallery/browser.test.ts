@@ -7,24 +7,25 @@ import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { chromium, type Browser } from 'playwright-core';
+import { chromium, type BrowserContext } from 'playwright-core';
 
 const CHROMIUM = '/usr/bin/chromium';
 const PAGE = resolve('gallery/index.html');
 const haveBrowser = existsSync(CHROMIUM);
 
 describe.skipIf(!haveBrowser)('gallery/index.html in headless Chromium', () => {
-  let browser: Browser;
+  let browser: BrowserContext;
   let profile: string;
 
   beforeAll(async () => {
     profile = mkdtempSync(join(tmpdir(), 'conformark-chromium-'));
-    browser = await chromium.launch({
+    browser = await chromium.launchPersistentContext(profile, {
       executablePath: CHROMIUM,
+      headless: true,
+      viewport: { width: 1280, height: 900 },
       args: [
-        '--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run',
+        '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run',
         '--disable-background-networking', '--disable-component-update', '--disable-sync',
-        `--user-data-dir=${profile}`,
       ],
     });
   });
@@ -36,7 +37,7 @@ describe.skipIf(!haveBrowser)('gallery/index.html in headless Chromium', () => {
 
   it('loads with no console errors, renders every figure and is not blank', async () => {
     expect(existsSync(PAGE)).toBe(true);
-    const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+    const page = await browser.newPage();
     const errors: string[] = [];
     page.on('console', (m) => {
       if (m.type() === 'error') errors.push(m.text());

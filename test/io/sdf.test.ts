@@ -9,7 +9,7 @@ const records: Array<{ smiles: string; v2: string; v3: string }> = [];
 beforeAll(() => {
   Resources.registerFromNodejs();
   for (const smiles of SMILES) {
-    const gen = new (ConformerGenerator as unknown as new (seed: number, debug: boolean) => ConformerGenerator)(7, false);
+    const gen = new ConformerGenerator(7);
     gen.initializeConformers(OclMolecule.fromSmiles(smiles), {});
     const mol = gen.getNextConformerAsMolecule()!;
     mol.setName(smiles);

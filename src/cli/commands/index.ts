@@ -3,6 +3,7 @@ import type { Command } from 'commander';
 import { registerBuild } from './build.js';
 import { registerInspect } from './inspect.js';
 import { registerNewman } from './newman.js';
+import { registerChair } from './chair.js';
 import { registerTrajectory } from './trajectory.js';
 
 export type RegisterCommand = (program: Command) => void;
@@ -12,5 +13,6 @@ export const COMMANDS = new Map<string, RegisterCommand>([
   ['inspect', registerInspect],
   ['newman', registerNewman],
   ['build', registerBuild],
+  ['chair', registerChair],
   ['trajectory', registerTrajectory],
 ]);

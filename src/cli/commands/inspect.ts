@@ -3,6 +3,9 @@ import type { Command } from 'commander';
 import { COUPLING_METHODS, inspectFile, inspectText, jsonText, protectInput, writeAtomic, type CouplingMethod } from '../../index.js';
 import { finiteNumber, oneOf, printWarnings } from '../options.js';
 
+/** Warnings printed on stderr before the rest are only counted (a trajectory can raise thousands). */
+const MAX_WARNINGS = 20;
+
 interface InspectFlags {
   json?: boolean;
   couplings?: boolean;
@@ -35,7 +38,13 @@ export function registerInspect(program: Command): void {
         energy: { field: flags.energyField, unit: flags.energyUnit },
         toleranceA: flags.tolerance === undefined ? undefined : finiteNumber('--tolerance', flags.tolerance, 0, 2),
       });
-      if (flags.json) for (const r of report.records) printWarnings(r.warnings, `${file}: record ${r.index}`);
+      if (flags.json) {
+        const all = report.records.flatMap((r) => r.warnings.map((w) => ({ ...w, message: `record ${r.index}: ${w.message}` })));
+        printWarnings(all.slice(0, MAX_WARNINGS), file);
+        if (all.length > MAX_WARNINGS) {
+          process.stderr.write(`conformark: warning: ${file}: ${all.length - MAX_WARNINGS} more warnings (the report lists each under its record)\n`);
+        }
+      }
       const text = flags.json ? jsonText(report) : inspectText(report);
       if (flags.output) writeAtomic(flags.output, text);
       else process.stdout.write(text);

@@ -3,6 +3,11 @@ import type { Command } from 'commander';
 import {
   atomIndex,
   bondSelection,
+  COUPLING_METHODS,
+  couplingsAcrossBond,
+  isSkippedCoupling,
+  type Coupling,
+  type CouplingMethod,
   newmanFigure,
   newmanView,
   prepareRecord,
@@ -31,6 +36,8 @@ interface NewmanFlags {
   idPrefix?: string;
   caption?: boolean;
   json?: boolean;
+  couplings?: boolean;
+  karplus?: string;
   output?: string;
 }
 
@@ -50,6 +57,8 @@ export function registerNewman(program: Command): void {
     .option('--theme <name|path>', 'column (print), projector (slides), contrast (colour-blind-safe), or a theme .json file (default column)')
     .option('--id-prefix <p>', 'prefix for ids inside the SVG, to keep several figures on one page apart (default newman-)')
     .option('--no-caption', 'leave out the caption under the drawing')
+    .option('--couplings', 'print predicted ³J(H,H) for each H/H pair (estimates; Haasnoot–de Leeuw–Altona 1980 by default)')
+    .option('--karplus <form>', `coupling equation: ${COUPLING_METHODS.join(', ')} (implies --couplings)`)
     .option('--json', 'print the analysis (conformark/newman@1) instead of a figure')
     .option('-o, --output <file>', 'write to FILE (.svg, .png or .pdf; .json with --json) instead of standard output')
     .action(async (file: string, flags: NewmanFlags) => {
@@ -57,10 +66,13 @@ export function registerNewman(program: Command): void {
       const { molecule: mol, graph, rings } = prepareRecord(await readRecord(file, wholeNumber('--record', flags.record ?? '1')));
       const [front, back] = bondSelection(mol, graph, flags.bond);
       const up = flags.up === undefined ? undefined : atomIndex(mol, flags.up);
+      const method = oneOf<CouplingMethod>('--karplus', flags.karplus, COUPLING_METHODS, 'haasnoot-1980');
+      const couplings = flags.couplings || flags.karplus !== undefined ? { method } : false;
       if (flags.json) {
         const view = newmanView(mol, graph, front, back, { up, rings });
-        printWarnings(view.warnings);
-        const text = `${JSON.stringify(toNewmanJson(view, mol), null, 2)}\n`;
+        const predicted = couplingsAcrossBond(mol, graph, front, back, { method }).filter((c): c is Coupling => !isSkippedCoupling(c));
+        printWarnings([...view.warnings, ...predicted.flatMap((c) => c.warnings)]);
+        const text = `${JSON.stringify(toNewmanJson(view, mol, { couplings: predicted }), null, 2)}\n`;
         if (flags.output) writeAtomic(flags.output, text);
         else process.stdout.write(text);
         return;
@@ -72,6 +84,7 @@ export function registerNewman(program: Command): void {
         labels: oneOf<NewmanLabels>('--labels', flags.labels, ['element', 'id', 'name'], 'element'),
         mark: flags.mark?.map((pair) => markPair(mol, pair)),
         caption: flags.caption !== false,
+        couplings,
         theme: flags.theme,
         idPrefix: flags.idPrefix,
       });

@@ -1,0 +1,77 @@
+/** `conformark chair FILE`: a ring drawn as the trade's chair (template) or as its true view (projected). */
+import type { Command } from 'commander';
+import {
+  chairFigure,
+  prepareRecord,
+  protectInput,
+  readRecord,
+  ringSelection,
+  toPlacementJson,
+  toReportRing,
+  writeAtomic,
+  writeFigure,
+  type RingHydrogens,
+  type RingLabels,
+  type RingView,
+} from '../../index.js';
+import { finiteNumber, oneOf, printWarnings, wholeNumber } from '../options.js';
+
+interface ChairFlags {
+  ring?: string;
+  record?: string;
+  view?: string;
+  elevation?: string;
+  hydrogens?: string;
+  labels?: string;
+  caption?: boolean;
+  theme?: string;
+  idPrefix?: string;
+  json?: boolean;
+  output?: string;
+}
+
+/** Adds the `chair` command to the program. */
+export function registerChair(program: Command): void {
+  program
+    .command('chair')
+    .description('draw a ring: the trade chair (template) for chairs, the true orthographic view (projected) for any ring')
+    .argument('<file>', 'coordinate file (XYZ, SDF/molfile, PDB; .gz read transparently; - for standard input)')
+    .option('--ring <R>', 'ring number as inspect lists it, or an ordered atom list such as 1-2-3-4-5-6 or O5-C1-C2-C3-C4-C5 (default: the first six-ring, else the first ring)')
+    .option('--record <n>', 'record (frame) to draw, counted from 1 (default 1)')
+    .option('--view <mode>', 'template (trade chair; chairs only) or projected (true view of any ring) (default: template for chairs, else projected)')
+    .option('--elevation <deg>', 'viewer elevation above the ring plane in degrees, -90 to 90 (default 26 for template, 20 for projected)')
+    .option('--hydrogens <mode>', 'show or hide the hydrogens on ring atoms (default show)')
+    .option('--labels <mode>', 'element (groups such as OH, CH₂OH, and ring locants), id (element + number) or name (atom names from the file) (default element)')
+    .option('--no-caption', 'leave out the caption (shape, descriptor, Q/θ/φ)')
+    .option('--theme <name|path>', 'column (print), projector (slides), contrast (colour-blind-safe), or a theme .json file (default column)')
+    .option('--id-prefix <p>', 'prefix for ids inside the SVG, to keep several figures on one page apart (default chair-)')
+    .option('--json', 'print the ring analysis and the 2D placement (conformark/chair@1) instead of a figure')
+    .option('-o, --output <file>', 'write to FILE (.svg, .png or .pdf; .json with --json) instead of standard output')
+    .action(async (file: string, flags: ChairFlags) => {
+      if (flags.output) protectInput(file);
+      const recordNumber = wholeNumber('--record', flags.record ?? '1');
+      const { molecule, graph, rings } = prepareRecord(await readRecord(file, recordNumber));
+      const ordered = flags.ring !== undefined && !/^\s*\d+\s*$/.test(flags.ring);
+      const ring = flags.ring === undefined ? undefined : ordered ? ringSelection(molecule, graph, rings, flags.ring) : Number(flags.ring.trim());
+      const figure = chairFigure(molecule, {
+        graph, rings, ring, ordered,
+        view: flags.view === undefined ? undefined : oneOf<RingView>('--view', flags.view, ['template', 'projected'], 'template'),
+        elevationDeg: flags.elevation === undefined ? undefined : finiteNumber('--elevation', flags.elevation, -90, 90),
+        hydrogens: oneOf<RingHydrogens>('--hydrogens', flags.hydrogens, ['show', 'hide'], 'show'),
+        labels: oneOf<RingLabels>('--labels', flags.labels, ['element', 'id', 'name'], 'element'),
+        caption: flags.caption !== false,
+        theme: flags.theme,
+        idPrefix: flags.idPrefix,
+      });
+      printWarnings(figure.warnings, `${file}: record ${recordNumber}`);
+      if (flags.json) {
+        const report = { schema: 'conformark/chair@1', record: recordNumber, ring: toReportRing(figure.ring), placement: toPlacementJson(figure.placement) };
+        const text = `${JSON.stringify(report, null, 2)}\n`;
+        if (flags.output) writeAtomic(flags.output, text);
+        else process.stdout.write(text);
+        return;
+      }
+      if (flags.output) await writeFigure(flags.output, figure.svg);
+      else process.stdout.write(`${figure.svg}\n`);
+    });
+}
