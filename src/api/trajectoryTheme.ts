@@ -10,7 +10,7 @@ import { DENSITY_LEVELS } from '../layout/densityShading.js';
 export const SHAPE_ORDER = ['chair', 'twist-boat', 'boat', 'half-chair', 'envelope', 'screw-boat', 'twist', 'planar', 'puckered'] as const;
 
 /** Okabe & Ito (2008) colour-blind-safe palette, one colour per shape in SHAPE_ORDER. */
-const PALETTE = ['#0072B2', '#E69F00', '#009E73', '#CC79A7', '#56B4E9', '#D55E00', '#F0E442', '#999999', '#000000'];
+const PALETTE = ['#0072B2', '#E69F00', '#009E73', '#CC79A7', '#F0E442', '#D55E00', '#56B4E9', '#999999', '#000000'];
 /** Opacities per shape when the theme draws in currentColor (no hue to spare). */
 const SHADES = [0.1, 0.32, 0.22, 0.45, 0.16, 0.55, 0.27, 0.05, 0.65];
 

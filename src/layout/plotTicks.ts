@@ -31,3 +31,15 @@ function trim(v: number): string {
   const s = Number(v.toPrecision(4)).toString();
   return s === '-0' ? '0' : s.replace('-', '−');
 }
+
+/**
+ * One label style for a whole axis: k or M suffixes for every tick when the largest needs one, so an axis
+ * never mixes 8000 with 10k.
+ * @example tickFormatter([0, 5000, 10000])(5000) // '5k'
+ */
+export function tickFormatter(ticks: readonly number[]): (v: number) => string {
+  const top = Math.max(0, ...ticks.map(Math.abs));
+  if (top >= 1e6) return (v) => (v === 0 ? '0' : `${trim(v / 1e6)}M`);
+  if (top >= 1e4) return (v) => (v === 0 ? '0' : `${trim(v / 1e3)}k`);
+  return trim;
+}

@@ -6,7 +6,7 @@
  */
 import { line } from 'd3-shape';
 import type { SeriesBucket } from '../analysis/seriesBuckets.js';
-import { formatTick, niceTicks } from './plotTicks.js';
+import { formatTick, niceTicks, tickFormatter } from './plotTicks.js';
 import { approximateMeasure, DEFAULT_METRICS, textStyle, type Scene, type SceneItem, type SceneMetrics, type TextMeasure } from './scene.js';
 
 /** One plotted series (index into the bucket ranges). */
@@ -43,13 +43,16 @@ function seriesPoints(buckets: readonly SeriesBucket[], s: number, spec: SeriesS
       prev = null;
       continue;
     }
+    if (spec.wraps && r[1] - r[0] > half) {
+      // the angle crossed 0/360 inside this column: its min and max say nothing, leave a gap
+      if (pts.length && pts[pts.length - 1] !== null) pts.push(null);
+      prev = null;
+      continue;
+    }
     if (spec.wraps && prev && (r[0] - prev[1] > half || prev[0] - r[1] > half)) pts.push(null);
     const x = xs(b);
     pts.push([x, ys(r[0])], [x, ys(r[1])]);
-    if (spec.wraps && r[1] - r[0] > half) {
-      pts.push(null);
-      prev = null;
-    } else prev = r;
+    prev = r;
   }
   return pts;
 }
@@ -118,10 +121,11 @@ export function layoutTimeSeries(
     }
     items.push({ type: 'text', role: 'panel-title', x: left, y: t - title.fontSize * 0.45, text: spec.label, anchor: 'start', ...title });
   });
+  const xFormat = tickFormatter(xTicks);
   for (const v of xTicks) {
     const x = sx(v);
     items.push({ type: 'line', role: 'axis', x1: x, y1: bottom, x2: x, y2: bottom + m.gap });
-    items.push({ type: 'text', role: 'tick-label', x, y: bottom + m.gap + tick.fontSize, text: formatTick(v), anchor: 'middle', ...tick });
+    items.push({ type: 'text', role: 'tick-label', x, y: bottom + m.gap + tick.fontSize, text: xFormat(v), anchor: 'middle', ...tick });
   }
   const xLabel = dt ? `time (${dt.unit})` : 'frame';
   let y = bottom + m.gap + tick.fontSize * 2.3;
