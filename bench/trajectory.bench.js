@@ -86,7 +86,7 @@ async function scan(path) {
 
 const bigPath = file(big);
 const smallPath = file(small);
-const { analyzeTrajectory } = await import('../dist/index.js');
+const { analyzeTrajectory, readFrames } = await import('../dist/index.js');
 console.log(`file: ${bigPath} (${(statSync(bigPath).size / 1e6).toFixed(0)} MB, ${big} frames)`);
 
 let t = performance.now();
@@ -94,12 +94,18 @@ const lines = await scan(bigPath);
 const scanS = (performance.now() - t) / 1000;
 if (lines !== big * 20) throw new Error(`scan counted ${lines} lines, expected ${big * 20}`);
 t = performance.now();
+let frames = 0;
+for await (const f of readFrames(bigPath, { reuse: true })) frames += f.coords.length > 0 ? 1 : 0;
+const readS = (performance.now() - t) / 1000;
+if (frames !== big) throw new Error(`readFrames gave ${frames} frames, expected ${big}`);
+t = performance.now();
 const summary = await analyzeTrajectory(bigPath, { dir: join(out, 'trajectory'), ring: '1' });
 const trajS = (performance.now() - t) / 1000;
 if (summary.frames.analysed !== big) throw new Error(`analysed ${summary.frames.analysed} frames, expected ${big}`);
 console.log(`line scan (read + split)        ${scanS.toFixed(2).padStart(7)} s  ${(big / scanS).toFixed(0).padStart(9)} frames/s`);
+console.log(`readFrames alone (reuse)         ${readS.toFixed(2).padStart(7)} s  ${(big / readS).toFixed(0).padStart(9)} frames/s`);
 console.log(`analyzeTrajectory (csv+figures) ${trajS.toFixed(2).padStart(7)} s  ${(big / trajS).toFixed(0).padStart(9)} frames/s`);
-console.log(`ratio trajectory / scan time: ${(trajS / scanS).toFixed(2)}x (goal: at most 2x)`);
+console.log(`ratio trajectory / scan time: ${(trajS / scanS).toFixed(2)}x (goal: at most 2x); readFrames / scan: ${(readS / scanS).toFixed(2)}x; analysis over reading: ${(trajS / readS).toFixed(2)}x`);
 console.log(`occupancy: ${Object.entries(summary.occupancy).map(([s, f]) => `${s} ${(100 * f).toFixed(1)}%`).join(', ')}`);
 
 // Peak memory in a fresh process per file size.
@@ -111,6 +117,6 @@ console.log(process.resourceUsage().maxRSS);`;
   if (r.status !== 0) throw new Error(r.stderr);
   return Number(r.stdout.trim()) / 1024;
 };
-for (const [frames, path] of [[small, smallPath], [big, bigPath]]) {
+if (process.env.TRAJ_SKIP_RSS !== '1') for (const [frames, path] of [[small, smallPath], [big, bigPath]]) {
   console.log(`peak RSS, ${String(frames).padStart(8)} frames (${(statSync(path).size / 1e6).toFixed(0).padStart(4)} MB file): ${child(path).toFixed(0)} MB (goal: under 150 MB, flat)`);
 }
