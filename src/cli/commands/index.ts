@@ -6,6 +6,7 @@ import { registerNewman } from './newman.js';
 import { registerChair } from './chair.js';
 import { registerBatch } from './batch.js';
 import { registerEnsemble } from './ensemble.js';
+import { registerTrajectory } from './trajectory.js';
 
 export type RegisterCommand = (program: Command) => void;
 
@@ -17,4 +18,5 @@ export const COMMANDS = new Map<string, RegisterCommand>([
   ['chair', registerChair],
   ['batch', registerBatch],
   ['ensemble', registerEnsemble],
+  ['trajectory', registerTrajectory],
 ]);
