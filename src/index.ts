@@ -41,6 +41,7 @@ export type { HaasnootParameters, HaasnootSet, HaasnootTerm } from './analysis/h
 export {
   COUPLING_METHODS,
   COUPLING_METHOD_NAMES,
+  COUPLING_METHOD_SHORT_NAMES,
   couplingsAcrossBond,
   isSkippedCoupling,
   ringCouplings,
@@ -234,3 +235,8 @@ export type { SeriesSpec, TimeSeriesOptions } from './layout/timeSeriesLayout.js
 export { layoutOccupancy } from './layout/occupancyLayout.js';
 export type { OccupancyOptions } from './layout/occupancyLayout.js';
 export { withTrajectoryRoles, SHAPE_ORDER } from './api/trajectoryTheme.js';
+// demo (integrator)
+export { renderDemo, DEMO_INPUTS } from './api/demo.js';
+export type { DemoOptions, DemoResult } from './api/demo.js';
+export { galleryPage } from './api/galleryPage.js';
+export type { GalleryFigure, GalleryLink, GallerySection } from './api/galleryPage.js';

@@ -4,7 +4,7 @@
  * API; the same inputs give the same bytes, and the committed gallery/ is exactly what this produces.
  */
 import { existsSync, mkdirSync, readdirSync, readFileSync, rmSync, statSync } from 'node:fs';
-import { join, relative } from 'node:path';
+import { join, relative, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { usageError } from '../model/errors.js';
 import { writeAtomic } from '../io/writeAtomic.js';
@@ -19,6 +19,7 @@ import { jsonText } from './jsonText.js';
 import { inspectFile } from './inspect.js';
 import { inspectText } from './inspectText.js';
 import { galleryPage, type GallerySection } from './galleryPage.js';
+import { svgSizePt } from '../render/renderPdf.js';
 import { DEMO_TRAJECTORY, demoTrajectory } from './demoTrajectory.js';
 
 /** Options of {@link renderDemo}. */
@@ -55,8 +56,10 @@ const shippedExamples = (): string => fileURLToPath(new URL('../../examples/', i
 export async function renderDemo(options: DemoOptions = {}): Promise<DemoResult> {
   const outDir = options.outDir ?? 'gallery';
   const examples = options.examplesDir ?? shippedExamples();
+  // Inputs are named relative to the working folder: that name appears in titles and reports, so the gallery
+  // made from the project folder (npm run demo) is the same wherever the project is checked out.
   const input = (name: string) => {
-    const path = join(examples, name);
+    const path = relative(process.cwd(), resolve(examples, name)) || name;
     if (!existsSync(path)) throw usageError('missing-example', `demo input ${path} is missing`, path);
     return path;
   };
@@ -136,7 +139,11 @@ export async function renderDemo(options: DemoOptions = {}): Promise<DemoResult>
   sections.push(await demoTrajectory(input(DEMO_INPUTS.walk), outDir));
 
   // 5. The page.
-  writeAtomic(out('index.html'), galleryPage(sections));
+  const sized = sections.map((s) => ({
+    ...s,
+    figures: s.figures.map((f) => ({ ...f, widthPt: svgSizePt(readFileSync(out(f.file), 'utf8')).width })),
+  }));
+  writeAtomic(out('index.html'), galleryPage(sized));
   const files = listFiles(outDir).filter((f) => f !== MARKER);
   writeAtomic(out(MARKER), jsonText({ schema: 'conformark/demo@1', files }));
   return { outDir, files };

@@ -7,7 +7,12 @@
 export interface GalleryFigure {
   readonly file: string;
   readonly caption: string;
+  /** The figure's own width in pt; every figure is shown at the same scale, so type sizes match. */
+  readonly widthPt?: number;
 }
+
+/** Screen pixels per figure pt on the page (1 pt = 4/3 px, shown half as large again). */
+const PX_PER_PT = 2;
 
 /** A link to a non-figure output (table, report). */
 export interface GalleryLink {
@@ -41,10 +46,9 @@ const STYLE = `
   .grid { display: grid; grid-template-columns: repeat(auto-fill, minmax(340px, 1fr)); gap: 16px; margin-top: 12px; }
   figure { margin: 0; background: #ffffff; border: 1px solid #d9d6cc; border-radius: 6px; padding: 12px;
            display: flex; flex-direction: column; }
-  figure img { display: block; width: 100%; height: 300px; object-fit: contain; }
+  figure img { display: block; max-width: 100%; height: auto; margin: auto; }
   figure.wide { grid-column: 1 / -1; }
-  figure.wide img { height: auto; max-height: 900px; }
-  figcaption { font-size: 13px; margin-top: 8px; color: #3b3a36; }
+  figcaption { font-size: 13px; margin-top: auto; padding-top: 10px; color: #3b3a36; }
   figcaption code { font-size: 12px; color: #6b6860; }
   ul.links { margin: 10px 0 0; padding-left: 20px; font-size: 14px; }
   footer { margin-top: 40px; padding-bottom: 40px; font-size: 13px; color: #55534c; }
@@ -56,7 +60,7 @@ const isWide = (file: string): boolean => /sheet|time-series|pucker-map/.test(fi
 function figureHtml(f: GalleryFigure): string {
   return [
     `      <figure${isWide(f.file) ? ' class="wide"' : ''}>`,
-    `        <img src="${href(f.file)}" alt="${escapeHtml(f.caption)}">`,
+    `        <img src="${href(f.file)}"${f.widthPt ? ` width="${Math.round(f.widthPt * PX_PER_PT)}"` : ''} alt="${escapeHtml(f.caption)}">`,
     `        <figcaption>${escapeHtml(f.caption)} <code>${escapeHtml(f.file)}</code></figcaption>`,
     '      </figure>',
   ].join('\n');

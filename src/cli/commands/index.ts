@@ -7,11 +7,11 @@ import { registerChair } from './chair.js';
 import { registerBatch } from './batch.js';
 import { registerEnsemble } from './ensemble.js';
 import { registerTrajectory } from './trajectory.js';
+import { registerDemo } from './demo.js';
 
 export type RegisterCommand = (program: Command) => void;
 
 export const COMMANDS = new Map<string, RegisterCommand>([
-  // each command file adds one entry here, e.g. ['inspect', registerInspect]
   ['inspect', registerInspect],
   ['newman', registerNewman],
   ['build', registerBuild],
@@ -19,4 +19,5 @@ export const COMMANDS = new Map<string, RegisterCommand>([
   ['batch', registerBatch],
   ['ensemble', registerEnsemble],
   ['trajectory', registerTrajectory],
+  ['demo', registerDemo],
 ]);
