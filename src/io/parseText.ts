@@ -42,9 +42,9 @@ export function parseTextSettled(text: string, options: ParseTextOptions = {}): 
     const stopped = (): boolean => fatal;
     // pieces of about 1 MiB keep the line arrays short-lived, as in streaming
     for (let at = 0; at < text.length && !fatal; at += PIECE) {
-      feedBlock(consumer, splitter.pushTextBlock(text.slice(at, at + PIECE)), stopped);
+      for (const block of splitter.pushTextBlocks(text.slice(at, at + PIECE))) feedBlock(consumer, block, stopped);
     }
-    if (!fatal) feedBlock(consumer, splitter.endBlock(), stopped);
+    if (!fatal) for (const block of splitter.endBlocks()) feedBlock(consumer, block, stopped);
     if (!fatal) consumer.end(splitter.lastLine);
   } catch (err) {
     if (!(err instanceof ParseError)) throw err;

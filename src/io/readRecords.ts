@@ -75,9 +75,9 @@ export async function* settledBatches(
       if (fatal || done) break;
       const next = await chunks.next();
       if (next.done) {
-        blocks = [splitter.endBlock()];
+        blocks = splitter.endBlocks();
         done = true;
-      } else blocks = [splitter.pushBytesBlock(next.value)];
+      } else blocks = splitter.pushBytesBlocks(next.value);
     }
     if (!fatal) consumer.end(splitter.lastLine);
   } catch (err) {
@@ -117,13 +117,14 @@ async function readHead(
   while (count < SNIFF_LINES && !done) {
     const next = await chunks.next();
     done = next.done === true;
-    const block = next.done ? splitter.endBlock() : splitter.pushBytesBlock(next.value);
-    blocks.push(block);
-    count += block.starts.length;
+    for (const block of next.done ? splitter.endBlocks() : splitter.pushBytesBlocks(next.value)) {
+      blocks.push(block);
+      count += block.count;
+    }
   }
   const lines: string[] = [];
-  for (const { text, starts, ends } of blocks) {
-    for (let k = 0; k < starts.length && lines.length < SNIFF_LINES; k++) lines.push(text.slice(starts[k], ends[k]));
+  for (const { text, count: n, starts, ends } of blocks) {
+    for (let k = 0; k < n && lines.length < SNIFF_LINES; k++) lines.push(text.slice(starts[k], ends[k]));
   }
   return { lines, blocks, done };
 }

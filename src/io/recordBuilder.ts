@@ -8,11 +8,14 @@ import type { ReadLimits } from './limits.js';
 import { findOverlap, overlapMessage } from './overlap.js';
 import { issue } from './sink.js';
 
+const NO_COORDS = new Float64Array(0);
+
 export class RecordBuilder {
   readonly atoms: Atom[] = [];
   /** Line of each atom, for messages. */
   readonly atomLines: number[] = [];
-  private coords = new Float64Array(48);
+  /** Allocated on the first atom or by `reserve`, so a record with a counts line gets one exact buffer. */
+  private coords = NO_COORDS;
   private bonds: Bond[] = [];
 
   constructor(
