@@ -5,7 +5,7 @@
  */
 import { elementInfo } from '../model/elements.js';
 import type { Atom } from '../model/molecule.js';
-import { fields, parseNumber, scanCount, scanFloat } from './numbers.js';
+import { fields, parseNumber, scanCount, scanDecimal } from './numbers.js';
 import { quote } from './sink.js';
 
 /** Counts line: atom and bond counts, and the version tag. */
@@ -89,7 +89,7 @@ function trimEnd(line: string, from: number, to: number): number {
 function spanFloat(line: string, from: number, to: number): number {
   const s = trimStart(line, from, to);
   const e = trimEnd(line, s, to);
-  return s < e ? scanFloat(line, s, e) : Number.NaN;
+  return s < e ? scanDecimal(line, s, e) : Number.NaN;
 }
 
 /** Integer in `line[from, to)` (`to` within the line); `blank` if empty, -1 if not a non-negative integer. */

@@ -225,9 +225,11 @@ export class SdfConsumer implements LineConsumer {
     if (this.field === null) {
       if (starts(text, start, end, '$$$$')) return this.endOfRecord();
       if (text.charCodeAt(start) === 62 && start < end) {
+        // the name is between the first `<` and the next `>` (as /<([^>]*)>/ finds it), else the rest of the line
         const line = text.slice(start, end);
-        const m = /<([^>]*)>/.exec(line);
-        this.field = m ? m[1]! : line.slice(1).trim();
+        const open = line.indexOf('<');
+        const close = open < 0 ? -1 : line.indexOf('>', open + 1);
+        this.field = close >= 0 ? line.slice(open + 1, close) : line.slice(1).trim();
         this.value = null;
       }
       return;
