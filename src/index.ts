@@ -41,6 +41,7 @@ export type { HaasnootParameters, HaasnootSet, HaasnootTerm } from './analysis/h
 export {
   COUPLING_METHODS,
   COUPLING_METHOD_NAMES,
+  COUPLING_METHOD_SHORT_NAMES,
   couplingsAcrossBond,
   isSkippedCoupling,
   ringCouplings,
@@ -212,6 +213,33 @@ export type { EnsembleOptions, EnsembleResult, EnsembleReport, EnsembleConformer
 export { ensembleText } from './api/ensembleText.js';
 export { writeEnsembleFigures } from './api/ensembleFigures.js';
 export type { EnsembleFigureOptions } from './api/ensembleFigures.js';
+// trajectory (area I)
+export { analyzeTrajectory } from './api/trajectory.js';
+export type { TrajectoryOptions, TrajectorySummary } from './api/trajectory.js';
+export { parseTimestep, TIME_UNITS } from './api/timestep.js';
+export type { Timestep, TimeUnit } from './api/timestep.js';
+export { TrajectoryStats } from './analysis/trajectoryStats.js';
+export type { ShapeStatistics, DwellStats, TrajectoryStatsOptions } from './analysis/trajectoryStats.js';
+export { PuckerKernel, PuckerValues } from './geometry/puckerKernel.js';
+export { torsionAt } from './geometry/torsionAt.js';
+export { ShapeTable, PLANAR_FORM, PUCKERED_FORM } from './analysis/shapeTable.js';
+export { PolarGrid } from './analysis/polarGrid.js';
+export type { PolarCell } from './analysis/polarGrid.js';
+export { SeriesBuckets } from './analysis/seriesBuckets.js';
+export type { SeriesBucket } from './analysis/seriesBuckets.js';
+export { layoutPuckerMap, equalAreaRadius } from './layout/puckerMapLayout.js';
+export type { PuckerMapOptions } from './layout/puckerMapLayout.js';
+export { layoutPseudorotationWheel } from './layout/pseudorotationWheelLayout.js';
+export { layoutTimeSeries } from './layout/timeSeriesLayout.js';
+export type { SeriesSpec, TimeSeriesOptions } from './layout/timeSeriesLayout.js';
+export { layoutOccupancy } from './layout/occupancyLayout.js';
+export type { OccupancyOptions } from './layout/occupancyLayout.js';
+export { withTrajectoryRoles, SHAPE_ORDER } from './api/trajectoryTheme.js';
+// demo (integrator)
+export { renderDemo, DEMO_INPUTS } from './api/demo.js';
+export type { DemoOptions, DemoResult } from './api/demo.js';
+export { galleryPage } from './api/galleryPage.js';
+export type { GalleryFigure, GalleryLink, GallerySection } from './api/galleryPage.js';
 
 // area J (robustness): file-system reasons in words
 export { fsReason, isSystemError } from './io/fsReason.js';

@@ -24,6 +24,13 @@ export const COUPLING_METHOD_NAMES: ReadonlyMap<CouplingMethod, string> = new Ma
   ['karplus-1963', 'Karplus (1963)'],
 ]);
 
+/** Short names for figure captions. */
+export const COUPLING_METHOD_SHORT_NAMES: ReadonlyMap<CouplingMethod, string> = new Map<CouplingMethod, string>([
+  ['haasnoot-1980', 'HLA 1980'],
+  ['karplus-1959', 'Karplus 1959'],
+  ['karplus-1963', 'Karplus 1963'],
+]);
+
 /** Options for the coupling calls. */
 export interface CouplingOptions {
   /** Equation to use. Default `'haasnoot-1980'`. */

@@ -14,6 +14,14 @@ export interface DuplicateOptions {
    * no source: a typical cut-off in conformer searches).
    */
   readonly rmsdThresholdA?: number;
+  /**
+   * Energy of each record (any one unit). When given, two records are the same only if their energies also
+   * differ by at most `energyWindow` — so rotamers of hydrogens (OH, CH3), which heavy atoms cannot tell apart
+   * but which differ in energy, stay separate. Default: not used.
+   */
+  readonly energies?: readonly number[];
+  /** Energy window in the unit of `energies`. Default 0.05 (kcal/mol; common practice, no source). */
+  readonly energyWindow?: number;
 }
 
 /**
@@ -21,13 +29,17 @@ export interface DuplicateOptions {
  * @example findDuplicates([a, b, a]) // [null, null, 0]
  */
 export function findDuplicates(records: readonly Molecule[], options: DuplicateOptions = {}): (number | null)[] {
-  const { rmsdThresholdA = 0.125 } = options;
+  const { rmsdThresholdA = 0.125, energies, energyWindow = 0.05 } = options;
+  if (energies && energies.length !== records.length) {
+    throw usageError('bad-energies', `${energies.length} energies given for ${records.length} records`);
+  }
+  const close = (u: number, i: number) => !energies || Math.abs(energies[u]! - energies[i]!) <= energyWindow;
   if (!(Number.isFinite(rmsdThresholdA) && rmsdThresholdA >= 0)) {
     throw usageError('bad-threshold', `RMSD threshold must be a non-negative number of Å, got ${rmsdThresholdA}`);
   }
   const unique: number[] = [];
   return records.map((record, i) => {
-    const match = unique.find((u) => heavyAtomRmsd(records[u]!, record).rmsdA <= rmsdThresholdA);
+    const match = unique.find((u) => close(u, i) && heavyAtomRmsd(records[u]!, record).rmsdA <= rmsdThresholdA);
     if (match !== undefined) return match;
     unique.push(i);
     return null;

@@ -3,8 +3,10 @@
  * `buildSymmetry.ts` and over proper and improper superpositions (so mirror-image conformers of an achiral
  * molecule, such as the two twist-boat enantiomers of cyclohexane, count as one). Optimal rotation by
  * Horn's quaternion method (Horn 1987, J. Opt. Soc. Am. A 4, 629 — from memory):
- * RMSD² = (ΣA² + ΣB² − 2λmax)/N with λmax the largest eigenvalue of the 4×4 key matrix. Area E writes the project's RMSD module; swap at will.
+ * RMSD² = (ΣA² + ΣB² − 2λmax)/N with λmax the largest eigenvalue of the 4×4 key matrix. The 4×4 eigenproblem is the shared
+ * `symmetricEigen` (cyclic Jacobi); the symmetry and mirror search is what this adds to `heavyAtomRmsd`.
  */
+import { symmetricEigen } from '../analysis/symmetricEigen.js';
 
 /**
  * Minimum RMSD (Å) between atoms `heavy` of two coordinate arrays (3 per atom), over the permutations
@@ -63,40 +65,6 @@ function superposedRmsd(a: Float64Array, b: Float64Array, perm: Int32Array): num
     [zx! - xz!, xy! + yx!, -xx! + yy! - zz!, yz! + zy!],
     [xy! - yx!, zx! + xz!, yz! + zy!, -xx! - yy! + zz!],
   ];
-  const lambda = Math.max(...symmetricEigenvalues(key));
+  const lambda = Math.max(...symmetricEigen(key).values);
   return Math.sqrt(Math.max(0, (sum - 2 * lambda) / n));
-}
-
-/** Eigenvalues of a small symmetric matrix by cyclic Jacobi rotations. */
-function symmetricEigenvalues(matrix: number[][]): number[] {
-  const m = matrix.map((row) => [...row]);
-  const size = m.length;
-  for (let sweep = 0; sweep < 50; sweep++) {
-    let off = 0;
-    for (let p = 0; p < size; p++) for (let q = p + 1; q < size; q++) off += m[p]![q]! ** 2;
-    if (off < 1e-22) break;
-    for (let p = 0; p < size; p++) {
-      for (let q = p + 1; q < size; q++) {
-        const apq = m[p]![q]!;
-        if (Math.abs(apq) < 1e-300) continue;
-        const theta = (m[q]![q]! - m[p]![p]!) / (2 * apq);
-        const t = Math.sign(theta || 1) / (Math.abs(theta) + Math.sqrt(theta * theta + 1));
-        const c = 1 / Math.sqrt(t * t + 1);
-        const sn = t * c;
-        for (let k = 0; k < size; k++) {
-          const mkp = m[k]![p]!;
-          const mkq = m[k]![q]!;
-          m[k]![p] = c * mkp - sn * mkq;
-          m[k]![q] = sn * mkp + c * mkq;
-        }
-        for (let k = 0; k < size; k++) {
-          const mpk = m[p]![k]!;
-          const mqk = m[q]![k]!;
-          m[p]![k] = c * mpk - sn * mqk;
-          m[q]![k] = sn * mpk + c * mqk;
-        }
-      }
-    }
-  }
-  return m.map((row, i) => row[i]!);
 }

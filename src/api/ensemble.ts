@@ -88,6 +88,9 @@ function degeneracyOf(mol: Molecule, field: string | undefined): number {
 const sameAtoms = (mols: readonly Molecule[]) =>
   mols.every((m) => m.atoms.length === mols[0]!.atoms.length && m.atoms.every((a, i) => a.element === mols[0]!.atoms[i]!.element));
 
+/** Energy window for duplicates, kcal/mol: common practice, no source. */
+const ENERGY_WINDOW_KCAL = 0.05;
+
 /**
  * Ranks molecules that all carry energies (throws a user error for one without).
  * @example ensembleOf(mols).report.conformers[0]?.population
@@ -108,7 +111,7 @@ export function ensembleOf(molecules: readonly Molecule[], options: EnsembleOpti
   if (rows.length === 0) throw usageError('no-records', 'no records with energies to rank');
   // 2. Duplicates among records with the same atoms in the same order.
   const comparable = sameAtoms(rows.map((r) => r.mol));
-  const dup = comparable ? findDuplicates(rows.map((r) => r.mol), { rmsdThresholdA: threshold }) : rows.map(() => null);
+  const dup = comparable ? findDuplicates(rows.map((r) => r.mol), { rmsdThresholdA: threshold, energies: rows.map((r) => r.energy), energyWindow: ENERGY_WINDOW_KCAL }) : rows.map(() => null);
   // 3. Populations over the unique records only.
   const unique = rows.flatMap((r, i) => (dup[i] === null ? [i] : []));
   const boltz = boltzmannPopulations(unique.map((i) => rows[i]!.energy), { temperatureK, degeneracies: unique.map((i) => rows[i]!.g) });
@@ -142,7 +145,7 @@ export function ensembleOf(molecules: readonly Molecule[], options: EnsembleOpti
   notes.push(options.degeneracyField === undefined ? 'degeneracy 1 for every record (no degeneracy field given)' : `degeneracies from field '${options.degeneracyField}'`);
   notes.push(
     comparable
-      ? `duplicates: heavy-atom RMSD after optimal superposition (Horn quaternion fit, atoms matched by number, no symmetry permutations) at most ${threshold} Å to a lower-energy record; a duplicate gets population 0 and its weight is not added to the record it duplicates (it is the same structure found twice; counting both would double it)`
+      ? `duplicates: heavy-atom RMSD after optimal superposition (Horn quaternion fit, atoms matched by number, no symmetry permutations) at most ${threshold} Å to a lower-energy record whose energy is within ${ENERGY_WINDOW_KCAL} kcal/mol (so hydrogen rotamers stay apart); a duplicate gets population 0 and its weight is not added to the record it duplicates (it is the same structure found twice; counting both would double it)`
       : 'duplicates not searched and couplings not averaged: the records do not share atom numbering',
   );
   if (couplings.length > 0) notes.push(`⟨³J(H,H)⟩: population-weighted average of each conformer's J (not of the torsions), method ${couplings[0]!.method}`);

@@ -3,13 +3,48 @@
  * clear "not a text file" error), strips CR of CRLF, counts lines from 1, and refuses over-long lines before
  * they are held in memory in full.
  */
-import { Buffer, isUtf8 } from 'node:buffer';
+import { Buffer, isAscii, isUtf8 } from 'node:buffer';
 import { ParseError } from '../model/errors.js';
-import { issue } from './sink.js';
+import { issue, type LineConsumer } from './sink.js';
+
+/**
+ * Complete lines as ranges of one string: line k < count (numbered `first + k`) is
+ * `text.slice(starts[k], ends[k])`, without its line break. Lets a consumer scan columns in place instead of
+ * taking a substring per line. (Typed arrays: pushing 16,000 numbers onto plain arrays cost 10x more.)
+ */
+export interface LineBlock {
+  readonly text: string;
+  readonly count: number;
+  readonly starts: Int32Array;
+  readonly ends: Int32Array;
+  readonly first: number;
+}
+
+/** The lines of some blocks as strings. */
+export function lineStrings(blocks: readonly LineBlock[]): string[] {
+  const out: string[] = [];
+  for (const { text, count, starts, ends } of blocks) {
+    for (let k = 0; k < count; k++) out.push(text.slice(starts[k], ends[k]));
+  }
+  return out;
+}
+
+/**
+ * Feeds the lines of a block to a consumer, in place when it scans ranges (`feedRange`), until `stopped()`.
+ */
+export function feedBlock(consumer: LineConsumer, block: LineBlock, stopped: () => boolean): void {
+  const { text, count, starts, ends, first } = block;
+  if (consumer.feedRange) {
+    for (let k = 0; k < count && !stopped(); k++) consumer.feedRange(text, starts[k]!, ends[k]!, first + k);
+  } else {
+    for (let k = 0; k < count && !stopped(); k++) consumer.feed(text.slice(starts[k], ends[k]), first + k);
+  }
+}
 
 /**
  * Pushes text or bytes in, returns the complete lines (without line breaks); `end()` returns the last one.
  * Lines are numbered consecutively from 1: the first line returned by a push is `lastLine + 1` of before.
+ * The `...Blocks` forms return the same lines as ranges (`LineBlock`), without a substring per line.
  */
 export class LineSplitter {
   /** Bytes of a UTF-8 sequence cut by the chunk boundary, kept for the next chunk. */
@@ -30,6 +65,21 @@ export class LineSplitter {
 
   /** Pushes raw bytes. Throws `ParseError` on binary input or an over-long line. */
   pushBytes(bytes: Uint8Array): string[] {
+    return lineStrings(this.pushBytesBlocks(bytes));
+  }
+
+  /** Pushes decoded text. Throws `ParseError` on NUL characters or an over-long line. */
+  pushText(text: string): string[] {
+    return lineStrings(this.pushTextBlocks(text));
+  }
+
+  /** Flushes the last line (when the input does not end with a line break). */
+  end(): string[] {
+    return lineStrings(this.endBlocks());
+  }
+
+  /** `pushBytes` as blocks. */
+  pushBytesBlocks(bytes: Uint8Array): LineBlock[] {
     let buf = Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength);
     if (this.carry) {
       buf = Buffer.concat([this.carry, buf]);
@@ -38,60 +88,75 @@ export class LineSplitter {
     const cut = completeLength(buf);
     if (cut < buf.length) this.carry = Buffer.from(buf.subarray(cut));
     const whole = buf.subarray(0, cut);
-    // isUtf8 + toString is several times faster than a fatal TextDecoder
+    // plain ASCII (the usual case) decodes as latin1, a straight copy, some 20x faster than UTF-8 decoding;
+    // otherwise isUtf8 + toString is several times faster than a fatal TextDecoder
+    if (isAscii(whole)) return this.pushTextBlocks(whole.toString('latin1'));
     if (!isUtf8(whole)) throw this.notText(this.lineNo + 1 + badUtf8Line(whole, this.rest));
-    return this.pushText(whole.toString('utf8'));
+    return this.pushTextBlocks(whole.toString('utf8'));
   }
 
-  /** Pushes decoded text. Throws `ParseError` on NUL characters or an over-long line. */
-  pushText(text: string): string[] {
-    if (text.indexOf('\u0000') !== -1) throw this.notText();
-    if (!this.started && text !== '') {
+  /**
+   * `pushText` as blocks: the line completed from the previous push is a block of its own, so the chunk
+   * itself is never concatenated (a 1 MB concatenation is a rope that reads many times slower). Every line
+   * is checked before anything is returned, so an over-long line throws before any line of the chunk is out.
+   */
+  pushTextBlocks(chunk: string): LineBlock[] {
+    if (chunk.indexOf('\u0000') !== -1) throw this.notText();
+    if (!this.started && chunk !== '') {
       this.started = true;
-      if (text.charCodeAt(0) === 0xfeff) text = text.slice(1); // byte-order mark
+      if (chunk.charCodeAt(0) === 0xfeff) chunk = chunk.slice(1); // byte-order mark
     }
-    const out: string[] = [];
-    let pos = 0;
-    let nl = text.indexOf('\n');
-    if (this.rest !== '' && nl !== -1) {
-      out.push(this.finish(this.rest + text.slice(0, nl)));
-      this.rest = '';
-      pos = nl + 1;
-      nl = text.indexOf('\n', pos);
+    const last = chunk.lastIndexOf('\n');
+    if (last === -1) {
+      this.rest = this.rest + chunk;
+      if (this.rest.length > this.maxLineLength + 1) this.tooLong(this.lineNo + 1);
+      return [];
     }
+    const blocks: LineBlock[] = [];
+    let from = 0;
+    if (this.rest !== '') {
+      from = chunk.indexOf('\n') + 1;
+      const joined = this.rest + chunk.slice(0, from);
+      blocks.push(this.ranges(joined, 0, joined.length - 1));
+    }
+    if (from <= last) blocks.push(this.ranges(chunk, from, last));
+    this.rest = chunk.slice(last + 1);
+    if (this.rest.length > this.maxLineLength + 1) this.tooLong(this.lineNo + 1);
+    return blocks;
+  }
+
+  /** `end` as blocks (none, or one with the last line). */
+  endBlocks(): LineBlock[] {
+    if (this.carry) throw this.notText(); // the input ends inside a UTF-8 sequence
+    if (this.rest === '') return [];
+    const raw = this.rest;
+    this.rest = '';
+    const first = this.lineNo + 1;
+    const e = raw.charCodeAt(raw.length - 1) === 13 ? raw.length - 1 : raw.length;
+    if (e > this.maxLineLength) this.tooLong(first);
+    this.lineNo++;
+    return [{ text: raw, count: 1, starts: Int32Array.of(0), ends: Int32Array.of(e), first }];
+  }
+
+  /** The lines of `text` from `from` up to the line break at `last` (inclusive), counted and checked. */
+  private ranges(text: string, from: number, last: number): LineBlock {
+    const first = this.lineNo + 1;
     const max = this.maxLineLength;
-    while (nl !== -1) {
-      let stop = nl;
-      if (stop > pos && text.charCodeAt(stop - 1) === 13) stop--;
-      if (stop - pos > max) this.tooLong(this.lineNo + 1);
-      out.push(text.slice(pos, stop));
+    let starts: Int32Array = new Int32Array(((last - from) >> 5) + 16);
+    let ends: Int32Array = new Int32Array(starts.length);
+    let count = 0;
+    for (let pos = from; pos <= last; ) {
+      const nl = text.indexOf('\n', pos);
+      let e = nl;
+      if (e > pos && text.charCodeAt(e - 1) === 13) e--;
+      if (e - pos > max) this.tooLong(this.lineNo + 1);
+      if (count === starts.length) [starts, ends] = [grown(starts), grown(ends)];
+      starts[count] = pos;
+      ends[count++] = e;
       this.lineNo++;
       pos = nl + 1;
-      nl = text.indexOf('\n', pos);
     }
-    if (pos < text.length) {
-      this.rest = this.rest + text.slice(pos);
-      if (this.rest.length > max + 1) this.tooLong(this.lineNo + 1);
-    }
-    return out;
-  }
-
-  /** Flushes the last line (when the input does not end with a line break). */
-  end(): string[] {
-    if (this.carry) throw this.notText(); // the input ends inside a UTF-8 sequence
-    const out: string[] = [];
-    if (this.rest !== '') {
-      out.push(this.finish(this.rest));
-      this.rest = '';
-    }
-    return out;
-  }
-
-  private finish(raw: string): string {
-    const line = raw.charCodeAt(raw.length - 1) === 13 ? raw.slice(0, -1) : raw;
-    if (line.length > this.maxLineLength) this.tooLong(this.lineNo + 1);
-    this.lineNo++;
-    return line;
+    return { text, count, starts, ends, first };
   }
 
   private tooLong(lineNo: number): never {
@@ -110,6 +175,13 @@ export class LineSplitter {
       ),
     );
   }
+}
+
+/** A copy of `a` with twice the room. */
+function grown(a: Int32Array): Int32Array {
+  const b = new Int32Array(2 * a.length);
+  b.set(a);
+  return b;
 }
 
 /** Length of the prefix of `buf` that ends on a UTF-8 sequence boundary (at most 3 bytes are held back). */

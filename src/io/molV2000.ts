@@ -4,7 +4,8 @@
  * as a fallback because many writers misalign the atom block.
  */
 import { elementInfo } from '../model/elements.js';
-import { fields, parseNumber, scanCount, scanFloat } from './numbers.js';
+import type { Atom } from '../model/molecule.js';
+import { fields, parseNumber, scanCount, scanDecimal } from './numbers.js';
 import { quote } from './sink.js';
 
 /** Counts line: atom and bond counts, and the version tag. */
@@ -72,29 +73,85 @@ function symbolOf(text: string): string | null {
   return hit;
 }
 
-/** Bounds of the non-blank text in columns [from, to). */
-function trimmed(line: string, from: number, to: number): [number, number] {
-  let s = from;
-  let e = Math.min(to, line.length);
-  while (s < e && line.charCodeAt(s) === 32) s++;
-  while (e > s && line.charCodeAt(e - 1) === 32) e--;
-  return [s, e];
+/** Start of the non-blank text in `line[from, to)` (blanks are spaces). */
+function trimStart(line: string, from: number, to: number): number {
+  while (from < to && line.charCodeAt(from) === 32) from++;
+  return from;
+}
+
+/** End of the non-blank text in `line[from, to)`. */
+function trimEnd(line: string, from: number, to: number): number {
+  while (to > from && line.charCodeAt(to - 1) === 32) to--;
+  return to;
+}
+
+/** Number in `line[from, to)` (`to` within the line), NaN when blank. */
+function spanFloat(line: string, from: number, to: number): number {
+  const s = trimStart(line, from, to);
+  const e = trimEnd(line, s, to);
+  return s < e ? scanDecimal(line, s, e) : Number.NaN;
+}
+
+/** Integer in `line[from, to)` (`to` within the line); `blank` if empty, -1 if not a non-negative integer. */
+function spanInt(line: string, from: number, to: number, blank: number): number {
+  const s = trimStart(line, from, to);
+  const e = trimEnd(line, s, to);
+  return s < e ? scanCount(line, s, e) : blank;
 }
 
 function columnFloat(line: string, from: number, to: number): number {
-  const [s, e] = trimmed(line, from, to);
-  return s < e ? scanFloat(line, s, e) : Number.NaN;
+  return spanFloat(line, from, Math.min(to, line.length));
 }
 
 function columnText(line: string, from: number, to: number): string {
-  const [s, e] = trimmed(line, from, to);
-  return line.slice(s, e);
+  const s = trimStart(line, from, Math.min(to, line.length));
+  return line.slice(s, trimEnd(line, s, Math.min(to, line.length)));
 }
 
 /** Integer in fixed columns [from, to); `blank` if empty, -1 if not a non-negative integer. */
 function columnInt(line: string, from: number, to: number, blank = -1): number {
-  const [s, e] = trimmed(line, from, to);
-  return s < e ? scanCount(line, s, e) : blank;
+  return spanInt(line, from, Math.min(to, line.length), blank);
+}
+
+/** Coordinates left by the last successful `scanV2000Atom` (one shared object: nothing allocated per atom). */
+export const scannedXyz = { x: 0, y: 0, z: 0 };
+
+/** Atoms are immutable, so one frozen atom per symbol text and charge code is shared between records. */
+const atomCache = new Map<number, Atom | null>();
+
+/**
+ * The hot path for an atom line `text[start, end)` in exact fixed columns, read in place: returns the (shared)
+ * atom and leaves x, y, z in `scannedXyz`, or returns `null` for anything else (misaligned, bad number,
+ * unknown element), for which the caller takes `parseV2000Atom` with its fallbacks and messages.
+ */
+export function scanV2000Atom(text: string, start: number, end: number): Atom | null {
+  if (end - start < 34 || text.charCodeAt(start + 30) !== 32) return null;
+  const x = spanFloat(text, start, start + 10);
+  const y = spanFloat(text, start + 10, start + 20);
+  const z = spanFloat(text, start + 20, start + 30);
+  if (!Number.isFinite(x) || !Number.isFinite(y) || !Number.isFinite(z)) return null;
+  const s = trimStart(text, start + 31, start + 34);
+  const e = trimEnd(text, s, start + 34);
+  if (s === e) return null;
+  let key = 0;
+  for (let i = s; i < e; i++) {
+    const c = text.charCodeAt(i);
+    if (c >= 128) return null;
+    key = key * 128 + c;
+  }
+  const code = spanInt(text, start + 36, Math.min(start + 39, end), 0);
+  key = key * 8 + (code >= 0 && code < 8 ? code : 0);
+  let atom = atomCache.get(key);
+  if (atom === undefined) {
+    const element = symbolOf(text.slice(s, e));
+    atom = element ? Object.freeze({ element, name: null, charge: CHARGE_CODES[code] ?? 0 }) : null;
+    if (atomCache.size < 1000) atomCache.set(key, atom);
+  }
+  if (atom === null) return null;
+  scannedXyz.x = x;
+  scannedXyz.y = y;
+  scannedXyz.z = z;
+  return atom;
 }
 
 /** One parsed bond line (1-based atom numbers as in the file). */
@@ -115,6 +172,21 @@ export function parseV2000Bond(line: string): V2000Bond | string {
     if (a < 0 || b < 0 || type < 0) return `expected a bond line (atom, atom, type), found ${quote(line)}`;
   }
   return { a, b, order: bondOrder(type) };
+}
+
+/** The atoms and order left by the last successful `scanV2000Bond`. */
+export const scannedBond = { a: 0, b: 0, order: 1 };
+
+/** The hot path for a bond line `text[start, end)` in fixed columns: true when read, else use `parseV2000Bond`. */
+export function scanV2000Bond(text: string, start: number, end: number): boolean {
+  const a = spanInt(text, start, Math.min(start + 3, end), -1);
+  const b = spanInt(text, start + 3, Math.min(start + 6, end), -1);
+  const type = spanInt(text, start + 6, Math.min(start + 9, end), -1);
+  if (a < 0 || b < 0 || type < 0) return false;
+  scannedBond.a = a;
+  scannedBond.b = b;
+  scannedBond.order = bondOrder(type);
+  return true;
 }
 
 /** Molfile bond type → order: 1, 2, 3, 4 (aromatic); query and special types count as 1. */

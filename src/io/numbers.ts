@@ -94,6 +94,30 @@ export function scanFloat(line: string, start: number, end: number): number {
 }
 
 /**
+ * `scanFloat` for exactly `line[start, end)`, with the usual plain decimal of at most 15 digits (`-1.2345`,
+ * fixed-column molfile coordinates) computed in one pass, to the same value; anything else goes to `scanFloat`.
+ */
+export function scanDecimal(line: string, start: number, end: number): number {
+  let i = start;
+  const negative = line.charCodeAt(i) === 45;
+  if (negative) i++;
+  let mantissa = 0;
+  let digits = 0;
+  let point = -1;
+  for (; i < end; i++) {
+    const c = line.charCodeAt(i);
+    if (c >= 48 && c <= 57) {
+      mantissa = mantissa * 10 + (c - 48);
+      digits++;
+    } else if (c === 46 && point < 0) point = i;
+    else return scanFloat(line, start, end);
+  }
+  if (digits === 0 || digits > 15) return scanFloat(line, start, end);
+  const value = point < 0 ? mantissa : mantissa / POW10[end - point - 1]!;
+  return negative ? -value : value;
+}
+
+/**
  * Parses `line[start, end)` as a non-negative decimal integer without allocating.
  * Returns -1 when it is not one, and `Infinity` when it has more than 15 digits (so a count such as
  * `999999999999999999` can be refused without being trusted).

@@ -4,7 +4,7 @@ import type { Molecule } from '../model/molecule.js';
 import { detectFormat } from './detectFormat.js';
 import { FORMATS, type ConsumerExtras } from './formats.js';
 import { resolveLimits, type ReadOptions } from './limits.js';
-import { LineSplitter } from './lines.js';
+import { feedBlock, LineSplitter } from './lines.js';
 import { emptyInputIssue } from './emptyInput.js';
 import type { Settled } from './sink.js';
 
@@ -39,16 +39,12 @@ export function parseTextSettled(text: string, options: ParseTextOptions = {}): 
     const extras: ConsumerExtras = {};
     const consumer = FORMATS.get(format)!.consumer(file, limits, emit, extras);
     const splitter = new LineSplitter(file, limits.maxLineLength);
-    const feed = (lines: string[], first: number): void => {
-      for (let k = 0; k < lines.length && !fatal; k++) consumer.feed(lines[k]!, first + k);
-    };
+    const stopped = (): boolean => fatal;
     // pieces of about 1 MiB keep the line arrays short-lived, as in streaming
     for (let at = 0; at < text.length && !fatal; at += PIECE) {
-      const first = splitter.lastLine + 1;
-      feed(splitter.pushText(text.slice(at, at + PIECE)), first);
+      for (const block of splitter.pushTextBlocks(text.slice(at, at + PIECE))) feedBlock(consumer, block, stopped);
     }
-    const first = splitter.lastLine + 1;
-    if (!fatal) feed(splitter.end(), first);
+    if (!fatal) for (const block of splitter.endBlocks()) feedBlock(consumer, block, stopped);
     if (!fatal) consumer.end(splitter.lastLine);
   } catch (err) {
     if (!(err instanceof ParseError)) throw err;

@@ -8,7 +8,7 @@ import { detectFormat, SNIFF_LINES } from './detectFormat.js';
 import { emptyInputIssue } from './emptyInput.js';
 import { FORMATS, type ConsumerExtras } from './formats.js';
 import { resolveLimits, type ReadLimits, type ReadOptions } from './limits.js';
-import { LineSplitter } from './lines.js';
+import { feedBlock, LineSplitter, type LineBlock } from './lines.js';
 import { openInput } from './openInput.js';
 import { scanConect } from './scanConect.js';
 import type { Settled } from './sink.js';
@@ -57,29 +57,27 @@ export async function* settledBatches(
     if (!r.ok && r.fatal) fatal = true;
   };
   const splitter = new LineSplitter(path, limits.maxLineLength);
+  const stopped = (): boolean => fatal;
   try {
     const head = await readHead(chunks, splitter);
-    const format = options.format ?? detectFormat(path, head.lines.slice(0, SNIFF_LINES).join('\n'));
+    const format = options.format ?? detectFormat(path, head.lines.join('\n'));
     const consumer = FORMATS.get(format)!.consumer(path, limits, emit, await consumerExtras(path, format, limits, extras));
-    let batch = head.lines;
-    let first = 1;
+    let blocks = head.blocks;
     for (let done = head.done; ; ) {
-      for (let k = 0; k < batch.length && !fatal; k++) {
-        const line = batch[k]!;
-        if (blank && line.trim() !== '') blank = false;
-        consumer.feed(line, first + k);
+      for (const block of blocks) {
+        if (blank && /\S/.test(block.text)) blank = false;
+        feedBlock(consumer, block, stopped);
       }
       if (queue.length > 0 && !fatal) {
         count += queue.length;
         yield queue.splice(0);
       }
       if (fatal || done) break;
-      first = splitter.lastLine + 1;
       const next = await chunks.next();
       if (next.done) {
-        batch = splitter.end();
+        blocks = splitter.endBlocks();
         done = true;
-      } else batch = splitter.pushBytes(next.value);
+      } else blocks = splitter.pushBytesBlocks(next.value);
     }
     if (!fatal) consumer.end(splitter.lastLine);
   } catch (err) {
@@ -112,17 +110,23 @@ export async function* readRecords(path: string, options: StreamOptions = {}): A
 async function readHead(
   chunks: AsyncGenerator<Uint8Array>,
   splitter: LineSplitter,
-): Promise<{ lines: string[]; done: boolean }> {
-  const lines: string[] = [];
-  while (lines.length < SNIFF_LINES) {
+): Promise<{ lines: string[]; blocks: LineBlock[]; done: boolean }> {
+  const blocks: LineBlock[] = [];
+  let count = 0;
+  let done = false;
+  while (count < SNIFF_LINES && !done) {
     const next = await chunks.next();
-    if (next.done) {
-      lines.push(...splitter.end());
-      return { lines, done: true };
+    done = next.done === true;
+    for (const block of next.done ? splitter.endBlocks() : splitter.pushBytesBlocks(next.value)) {
+      blocks.push(block);
+      count += block.count;
     }
-    for (const l of splitter.pushBytes(next.value)) lines.push(l);
   }
-  return { lines, done: false };
+  const lines: string[] = [];
+  for (const { text, count: n, starts, ends } of blocks) {
+    for (let k = 0; k < n && lines.length < SNIFF_LINES; k++) lines.push(text.slice(starts[k], ends[k]));
+  }
+  return { lines, blocks, done };
 }
 
 /** PDB files (not standard input) get their CONECT records scanned first, so models can be streamed. */

@@ -8,11 +8,16 @@ import type { ReadLimits } from './limits.js';
 import { findOverlap, overlapMessage } from './overlap.js';
 import { issue } from './sink.js';
 
+const NO_COORDS = new Float64Array(0);
+
 export class RecordBuilder {
   readonly atoms: Atom[] = [];
-  /** Line of each atom, for messages. */
-  readonly atomLines: number[] = [];
-  private coords = new Float64Array(48);
+  /** Line of the first atom; the others follow it line by line unless `atomLines` says otherwise. */
+  private firstLine = 0;
+  /** Line of each atom, for messages; only kept once atoms stop being on consecutive lines. */
+  private atomLines: number[] | null = null;
+  /** Allocated on the first atom or by `reserve`, so a record with a counts line gets one exact buffer. */
+  private coords = NO_COORDS;
   private bonds: Bond[] = [];
 
   constructor(
@@ -39,8 +44,13 @@ export class RecordBuilder {
     this.coords[k] = x;
     this.coords[k + 1] = y;
     this.coords[k + 2] = z;
+    const n = this.atoms.length;
+    if (n === 0) this.firstLine = line;
+    else if (this.atomLines === null && line !== this.firstLine + n) {
+      this.atomLines = Array.from({ length: n }, (_, i) => this.firstLine + i);
+    }
+    this.atomLines?.push(line);
     this.atoms.push(atom);
-    this.atomLines.push(line);
     return null;
   }
 
@@ -90,7 +100,7 @@ export class RecordBuilder {
     if (pair) {
       const [i, j] = pair;
       const message = overlapMessage(this.atoms, coords, i, j, this.limits.minDistanceA);
-      return issue('overlapping-atoms', this.file, this.atomLines[j] ?? line, message);
+      return issue('overlapping-atoms', this.file, this.atomLines?.[j] ?? this.firstLine + j, message);
     }
     return {
       title,

@@ -3,10 +3,19 @@
  * or V3000 connection table, `M  CHG` charges, `M  END`, then `> <name>` data fields up to `$$$$`. Bonds and
  * orders come from the file. A bad record is reported and reading resumes after its `$$$$`.
  */
-import type { Atom, Molecule } from '../model/molecule.js';
+import type { Molecule } from '../model/molecule.js';
 import type { Issue } from '../model/errors.js';
 import type { ReadLimits } from './limits.js';
-import { parseChargeLine, parseCounts, parseV2000Atom, parseV2000Bond } from './molV2000.js';
+import {
+  parseChargeLine,
+  parseCounts,
+  parseV2000Atom,
+  parseV2000Bond,
+  scannedBond,
+  scannedXyz,
+  scanV2000Atom,
+  scanV2000Bond,
+} from './molV2000.js';
 import { V3000Reader } from './molV3000.js';
 import { RecordBuilder } from './recordBuilder.js';
 import { failure, issue, type Emit, type LineConsumer } from './sink.js';
@@ -25,19 +34,25 @@ const enum State {
 /** A line of small integers only: a bond line where an atom line was expected. */
 const BOND_LIKE = /^(\s*\d{1,3}){3,7}\s*$/;
 
-const neutral = new Map<string, Atom>();
+/** True when line `text[start, end)` starts with `prefix` (which holds no line break). */
+function starts(text: string, start: number, end: number, prefix: string): boolean {
+  return end - start >= prefix.length && text.startsWith(prefix, start);
+}
 
-/** Atoms are immutable, so the neutral atom of each element is shared between records. */
-function molAtom(element: string, charge: number): Atom {
-  if (charge !== 0) return { element, name: null, charge };
-  let atom = neutral.get(element);
-  if (!atom) neutral.set(element, (atom = Object.freeze({ element, name: null, charge: 0 })));
-  return atom;
+/** `text.slice(start, end).trim() === ''`, without the slice for the usual printable ASCII first character. */
+function isBlankLine(text: string, start: number, end: number): boolean {
+  if (start === end) return true;
+  const c = text.charCodeAt(start);
+  if (c > 32 && c < 127) return false;
+  return text.slice(start, end).trim() === '';
 }
 
 export class SdfConsumer implements LineConsumer {
   private state = State.Header;
-  private header: string[] = [];
+  /** Header lines read so far (3 in all), the first (the title) and whether all were blank. */
+  private headerLines = 0;
+  private title = '';
+  private headerBlank = true;
   private start = 0;
   private record = 0;
   private counts = { atoms: 0, bonds: 0 };
@@ -46,7 +61,7 @@ export class SdfConsumer implements LineConsumer {
   private v3000: V3000Reader | null = null;
   private properties: Record<string, string> = {};
   private field: string | null = null;
-  private value: string[] = [];
+  private value: string | null = null;
   private stopped = false;
 
   constructor(
@@ -56,23 +71,28 @@ export class SdfConsumer implements LineConsumer {
   ) {}
 
   feed(line: string, lineNo: number): void {
+    this.feedRange(line, 0, line.length, lineNo);
+  }
+
+  /** Reads line `text[start, end)`; the atom and bond blocks are scanned in place. */
+  feedRange(text: string, start: number, end: number, lineNo: number): void {
     if (this.stopped) return;
-    if (this.state !== State.Data && line.startsWith('$$$$')) return this.endOfRecord();
+    if (this.state !== State.Data && starts(text, start, end, '$$$$')) return this.endOfRecord();
     switch (this.state) {
       case State.Header:
-        return this.headerLine(line, lineNo);
+        return this.headerLine(text, start, end, lineNo);
       case State.Counts:
-        return this.countsLineIn(line, lineNo);
+        return this.countsLineIn(text.slice(start, end), lineNo);
       case State.Atoms:
-        return this.atomLine(line, lineNo);
+        return this.atomLine(text, start, end, lineNo);
       case State.Bonds:
-        return this.bondLine(line, lineNo);
+        return this.bondLine(text, start, end, lineNo);
       case State.V3000:
-        return this.v3000Line(line, lineNo);
+        return this.v3000Line(text.slice(start, end), lineNo);
       case State.Props:
-        return this.propLine(line, lineNo);
+        return this.propLine(text, start, end, lineNo);
       case State.Data:
-        return this.dataLine(line);
+        return this.dataLine(text, start, end);
       case State.Skip:
         return;
     }
@@ -81,12 +101,12 @@ export class SdfConsumer implements LineConsumer {
   end(): void {
     if (this.stopped || this.state === State.Skip) return;
     if (this.state === State.Data) return this.finish();
-    if (this.state === State.Header && this.header.every((l) => l.trim() === '')) return;
+    if (this.state === State.Header && this.headerBlank) return;
     this.fail(issue('truncated', this.file, this.truncationLine(), this.truncation()));
   }
 
-  private headerLine(line: string, lineNo: number): void {
-    if (this.header.length === 0) {
+  private headerLine(text: string, start: number, end: number, lineNo: number): void {
+    if (this.headerLines === 0) {
       this.start = lineNo;
       this.record++;
       if (this.record > this.limits.maxRecords) {
@@ -95,9 +115,10 @@ export class SdfConsumer implements LineConsumer {
         this.emit(failure(issue('too-many-records', this.file, lineNo, message), true));
         return;
       }
+      this.title = text.slice(start, end);
     }
-    this.header.push(line);
-    if (this.header.length === 3) this.state = State.Counts;
+    if (this.headerBlank && !isBlankLine(text, start, end)) this.headerBlank = false;
+    if (++this.headerLines === 3) this.state = State.Counts;
   }
 
   private countsLineIn(line: string, lineNo: number): void {
@@ -119,26 +140,36 @@ export class SdfConsumer implements LineConsumer {
     this.state = counts.atoms > 0 ? State.Atoms : counts.bonds > 0 ? State.Bonds : State.Props;
   }
 
-  private atomLine(line: string, lineNo: number): void {
-    if (line.startsWith('M  ')) return this.fail(issue('wrong-count', this.file, this.countsLine, this.truncation()));
-    if (line.startsWith('> ')) return this.fail(issue('truncated', this.file, this.countsLine, this.truncation()));
-    const atom = parseV2000Atom(line);
-    if ('code' in atom) {
-      if (BOND_LIKE.test(line)) return this.fail(issue('wrong-count', this.file, this.countsLine, this.truncation()));
-      return this.fail(issue(atom.code, this.file, lineNo, atom.message));
+  private atomLine(text: string, start: number, end: number, lineNo: number): void {
+    let atom = scanV2000Atom(text, start, end);
+    let { x, y, z } = scannedXyz;
+    if (atom === null) {
+      const line = text.slice(start, end);
+      if (line.startsWith('M  ')) return this.fail(issue('wrong-count', this.file, this.countsLine, this.truncation()));
+      if (line.startsWith('> ')) return this.fail(issue('truncated', this.file, this.countsLine, this.truncation()));
+      const parsed = parseV2000Atom(line);
+      if ('code' in parsed) {
+        if (BOND_LIKE.test(line)) return this.fail(issue('wrong-count', this.file, this.countsLine, this.truncation()));
+        return this.fail(issue(parsed.code, this.file, lineNo, parsed.message));
+      }
+      ({ x, y, z } = parsed);
+      atom = { element: parsed.element, name: null, charge: parsed.charge };
     }
-    const { element, x, y, z, charge } = atom;
-    const err = this.builder.addAtom(molAtom(element, charge), x, y, z, lineNo);
+    const err = this.builder.addAtom(atom, x, y, z, lineNo);
     if (err) return this.fail(err);
     if (this.builder.atomCount === this.counts.atoms) this.state = this.counts.bonds > 0 ? State.Bonds : State.Props;
   }
 
   private bondsRead = 0;
 
-  private bondLine(line: string, lineNo: number): void {
-    if (line.startsWith('M  ')) return this.fail(issue('wrong-count', this.file, this.countsLine, this.truncation()));
-    const bond = parseV2000Bond(line);
-    if (typeof bond === 'string') return this.fail(issue('bad-bond', this.file, lineNo, bond));
+  private bondLine(text: string, start: number, end: number, lineNo: number): void {
+    if (starts(text, start, end, 'M  ')) return this.fail(issue('wrong-count', this.file, this.countsLine, this.truncation()));
+    let bond: { readonly a: number; readonly b: number; readonly order: number } = scannedBond;
+    if (!scanV2000Bond(text, start, end)) {
+      const parsed = parseV2000Bond(text.slice(start, end));
+      if (typeof parsed === 'string') return this.fail(issue('bad-bond', this.file, lineNo, parsed));
+      bond = parsed;
+    }
     const n = this.builder.atomCount;
     const number = this.bondsRead + 1;
     if (bond.a < 1 || bond.a > n || bond.b < 1 || bond.b > n) {
@@ -156,16 +187,17 @@ export class SdfConsumer implements LineConsumer {
     if (this.v3000!.done) this.state = State.Props;
   }
 
-  private propLine(line: string, lineNo: number): void {
-    if (line.startsWith('M  END')) {
+  private propLine(text: string, start: number, end: number, lineNo: number): void {
+    if (starts(text, start, end, 'M  END')) {
       this.state = State.Data;
       return;
     }
-    if (line.startsWith('> ') || line === '>') {
+    if (starts(text, start, end, '> ') || (end - start === 1 && text.charCodeAt(start) === 62)) {
       this.state = State.Data; // lenient: a missing `M  END` before the data fields
-      return this.dataLine(line);
+      return this.dataLine(text, start, end);
     }
-    if (line.startsWith('M  CHG')) {
+    if (starts(text, start, end, 'M  CHG')) {
+      const line = text.slice(start, end);
       const pairs = parseChargeLine(line);
       if (typeof pairs === 'string') return this.fail(issue('bad-charge', this.file, lineNo, pairs));
       this.applyCharges(pairs, lineNo);
@@ -189,30 +221,34 @@ export class SdfConsumer implements LineConsumer {
     }
   }
 
-  private dataLine(line: string): void {
+  private dataLine(text: string, start: number, end: number): void {
     if (this.field === null) {
-      if (line.startsWith('$$$$')) return this.endOfRecord();
-      if (line.startsWith('>')) {
-        const m = /<([^>]*)>/.exec(line);
-        this.field = m ? m[1]! : line.slice(1).trim();
-        this.value = [];
+      if (starts(text, start, end, '$$$$')) return this.endOfRecord();
+      if (text.charCodeAt(start) === 62 && start < end) {
+        // the name is between the first `<` and the next `>` (as /<([^>]*)>/ finds it), else the rest of the line
+        const line = text.slice(start, end);
+        const open = line.indexOf('<');
+        const close = open < 0 ? -1 : line.indexOf('>', open + 1);
+        this.field = close >= 0 ? line.slice(open + 1, close) : line.slice(1).trim();
+        this.value = null;
       }
       return;
     }
-    if (line.trim() === '' || line.startsWith('$$$$')) {
-      this.properties[this.field] = this.value.join('\n');
+    if (isBlankLine(text, start, end) || starts(text, start, end, '$$$$')) {
+      this.properties[this.field] = this.value ?? '';
       this.field = null;
-      if (line.startsWith('$$$$')) this.endOfRecord();
+      if (starts(text, start, end, '$$$$')) this.endOfRecord();
       return;
     }
-    this.value.push(line);
+    const line = text.slice(start, end);
+    this.value = this.value === null ? line : `${this.value}\n${line}`;
   }
 
   private endOfRecord(): void {
     // a missing `M  END` before `$$$$` is accepted (several writers omit it)
     if (this.state === State.Data || this.state === State.Props) this.finish();
     else if (this.state === State.Skip) this.reset();
-    else if (this.state === State.Header && this.header.length === 0) this.reset();
+    else if (this.state === State.Header && this.headerLines === 0) this.reset();
     else {
       this.fail(issue('truncated', this.file, this.truncationLine(), this.truncation()));
       this.reset();
@@ -220,8 +256,8 @@ export class SdfConsumer implements LineConsumer {
   }
 
   private finish(): void {
-    if (this.field !== null) this.properties[this.field] = this.value.join('\n');
-    const title = (this.header[0] ?? '').trim();
+    if (this.field !== null) this.properties[this.field] = this.value ?? '';
+    const title = this.title.trim();
     const result: Molecule | Issue = this.builder.finish(title, this.properties, this.record, this.start, true);
     if ('code' in result) this.fail(result);
     else this.emit({ ok: true, molecule: result });
@@ -247,11 +283,13 @@ export class SdfConsumer implements LineConsumer {
 
   private reset(): void {
     this.state = State.Header;
-    this.header = [];
+    this.headerLines = 0;
+    this.title = '';
+    this.headerBlank = true;
     this.v3000 = null;
     this.properties = {};
     this.field = null;
-    this.value = [];
+    this.value = null;
     this.bondsRead = 0;
     this.chargesReset = false;
   }

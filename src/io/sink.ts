@@ -17,6 +17,11 @@ export type Emit = (result: Settled) => void;
 export interface LineConsumer {
   /** `lineNo` is 1-based. */
   feed(line: string, lineNo: number): void;
+  /**
+   * Optional: the same as `feed(text.slice(start, end), lineNo)`, for consumers that read columns in place.
+   * `[start, end)` never includes the line break.
+   */
+  feedRange?(text: string, start: number, end: number, lineNo: number): void;
   /** `lastLine` is the number of the last line fed (0 for empty input). */
   end(lastLine: number): void;
 }

@@ -12,7 +12,7 @@ import { drawnAzimuths, type NewmanAngles } from './newmanAngles.js';
 import { atomLabelText, boxAt, rayCandidates, textBox, type NewmanLabels } from './newmanLabels.js';
 import { firstFree, grow, type Box, type Obstacles } from './labelPlacement.js';
 import { torsionArcPath, torsionArcPoints } from './torsionArc.js';
-import { approximateMeasure, DEFAULT_METRICS, textStyle, type Scene, type SceneItem, type SceneMetrics, type TextMeasure } from './scene.js';
+import { approximateMeasure, DEFAULT_METRICS, shiftItem, textStyle, type Scene, type SceneItem, type SceneMetrics, type TextMeasure } from './scene.js';
 import { couplingLines, newmanCaption, newmanDescription, torsionText } from './newmanText.js';
 
 /** How hydrogens are drawn: with labels, not at all, or as short unlabelled stubs (`collapse`). */
@@ -181,7 +181,7 @@ export function layoutNewman(view: NewmanView, mol: Molecule, options: NewmanLay
   });
   const dx = metrics.margin - x0;
   const dy = metrics.margin - y0;
-  const shifted = items.map((it) => shift(it, dx, dy));
+  const shifted = items.map((it) => shiftItem(it, dx, dy));
   shifted.splice(arcSlot, 0, ...arcs.map((a): SceneItem => ({ type: 'path', role: 'torsion-arc', d: torsionArcPath(dx, dy, a.r, a.from, a.sweep), atoms: [a.x, view.front, view.back, a.y] })));
   return {
     kind: 'newman',
@@ -191,13 +191,4 @@ export function layoutNewman(view: NewmanView, mol: Molecule, options: NewmanLay
     desc: newmanDescription(view, mol, marks, angles),
     items: shifted,
   };
-}
-
-function shift(it: SceneItem, dx: number, dy: number): SceneItem {
-  switch (it.type) {
-    case 'line': return { ...it, x1: it.x1 + dx, y1: it.y1 + dy, x2: it.x2 + dx, y2: it.y2 + dy };
-    case 'circle': return { ...it, cx: it.cx + dx, cy: it.cy + dy };
-    case 'text': return { ...it, x: it.x + dx, y: it.y + dy };
-    case 'path': return it;
-  }
 }

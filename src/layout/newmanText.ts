@@ -1,7 +1,7 @@
 /** Words of a Newman figure: torsion values, caption lines and the SVG description. */
 import type { Molecule } from '../model/molecule.js';
 import type { NewmanView } from '../analysis/newman.js';
-import { COUPLING_METHOD_NAMES, type CouplingMethod } from '../analysis/coupling.js';
+import { COUPLING_METHOD_SHORT_NAMES, type CouplingMethod } from '../analysis/coupling.js';
 import type { NewmanAngles } from './newmanAngles.js';
 
 const MINUS = '\u2212';
@@ -52,5 +52,5 @@ export function couplingLines(
     return `³J(${id(mol, c.front)},${id(mol, c.back)}) ${c.jHz.toFixed(1)} Hz (${torsionText(p?.torsionDeg ?? null)})`;
   });
   const method = couplings[0]!.method;
-  return [...lines, `predicted: ${COUPLING_METHOD_NAMES.get(method as CouplingMethod) ?? method} (estimates)`];
+  return [...lines, `³J estimates: ${COUPLING_METHOD_SHORT_NAMES.get(method as CouplingMethod) ?? method}`];
 }

@@ -10,7 +10,7 @@ import type { Graph } from '../perceive/graph.js';
 import type { RingAnalysis } from '../analysis/ringAnalysis.js';
 import { firstFree, grow, type Box, type Obstacles, type Segment } from './labelPlacement.js';
 import { boxAt, textBox, type TextBox } from './newmanLabels.js';
-import { approximateMeasure, DEFAULT_METRICS, textStyle, type Scene, type SceneItem, type SceneLine, type SceneMetrics, type TextMeasure, type TextStyle } from './scene.js';
+import { approximateMeasure, DEFAULT_METRICS, shiftItem, textStyle, type Scene, type SceneItem, type SceneLine, type SceneMetrics, type TextMeasure, type TextStyle } from './scene.js';
 import { ringCaption, ringDescription, ringTitle, type CaptionRun } from './ringCaption.js';
 import { ringAtomLabel, ringVertexLabel, substituentLabel, type RingLabels } from './ringLabels.js';
 import type { RingPlacement } from './ringPlacement.js';
@@ -158,7 +158,7 @@ export function layoutRing(placement: RingPlacement, ring: RingAnalysis, mol: Mo
     height: y1 - y0 + 2 * metrics.margin,
     title: ringTitle(ring, placement.view),
     desc: ringDescription(ring, placement.view, placement.elevationDeg, element),
-    items: [...items, ...texts].map((it) => shift(it, dx, dy)),
+    items: [...items, ...texts].map((it) => shiftItem(it, dx, dy)),
   };
 }
 
@@ -207,13 +207,4 @@ function captionLine(runs: readonly CaptionRun[], style: TextStyle, measure: Tex
     return item;
   });
   return { items, x0: midX - total / 2, x1: midX + total / 2 };
-}
-
-function shift(it: SceneItem, dx: number, dy: number): SceneItem {
-  switch (it.type) {
-    case 'line': return { ...it, x1: it.x1 + dx, y1: it.y1 + dy, x2: it.x2 + dx, y2: it.y2 + dy };
-    case 'circle': return { ...it, cx: it.cx + dx, cy: it.cy + dy };
-    case 'text': return { ...it, x: it.x + dx, y: it.y + dy };
-    case 'path': return it;
-  }
 }

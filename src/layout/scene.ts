@@ -112,3 +112,13 @@ export const DEFAULT_METRICS: SceneMetrics = {
     caption: { fontSize: 7, fontWeight: 'normal' },
   },
 };
+
+/** The item moved by (dx, dy); paths are already placed in final coordinates and stay as they are. */
+export function shiftItem(it: SceneItem, dx: number, dy: number): SceneItem {
+  switch (it.type) {
+    case 'line': return { ...it, x1: it.x1 + dx, y1: it.y1 + dy, x2: it.x2 + dx, y2: it.y2 + dy };
+    case 'circle': return { ...it, cx: it.cx + dx, cy: it.cy + dy };
+    case 'text': return { ...it, x: it.x + dx, y: it.y + dy };
+    case 'path': return it;
+  }
+}

@@ -13,7 +13,7 @@ import { meanPlane } from '../../src/geometry/cremerPople.js';
 import { dot, sub, unit } from '../../src/geometry/vec3.js';
 import { atomPosition, type Molecule } from '../../src/model/molecule.js';
 import { cyclohexaneChair, moleculeOf } from '../helpers/chairModelE.js';
-import { mmffConformer } from '../helpers/fromOpenchemlibE.js';
+import { mmffConformer } from '../helpers/fromOpenchemlib.js';
 
 const graphOf = (m: Molecule) => buildGraph(m.atoms.length, m.bonds!);
 

@@ -65,6 +65,14 @@ describe('findDuplicates', () => {
     expect(findDuplicates([chair, flat], { rmsdThresholdA: 10 })).toEqual([null, 0]);
     expect(() => findDuplicates([chair], { rmsdThresholdA: -1 })).toThrow(/non-negative/);
   });
+
+  it('findDuplicates with energies keeps same-skeleton records apart when their energies differ by more than the window', () => {
+    const chair = cyclohexaneChair();
+    const copy = mapped(chair, turn);
+    expect(findDuplicates([chair, copy], { energies: [0, 0.02] })).toEqual([null, 0]);
+    expect(findDuplicates([chair, copy], { energies: [0, 0.3] })).toEqual([null, null]);
+    expect(findDuplicates([chair, copy], { energies: [0, 0.3], energyWindow: 0.5 })).toEqual([null, 0]);
+  });
 });
 
 describe('torsionFingerprint', () => {

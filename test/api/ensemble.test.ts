@@ -111,7 +111,7 @@ describe('ensembleFile', () => {
   it('writeEnsembleFigures writes a well-formed sheet in energy order and an energy ladder', () => {
     const result = ensembleOf([at(withProperties(chairs[1]!, { energy: '1.74' }), 1), at(withProperties(chairs[0]!, { energy: '0' }), 2)]);
     const dir = temp();
-    expect(writeEnsembleFigures(result, dir, { idPrefix: 'x-' })).toEqual(['ensemble-sheet-1.svg', 'energy-ladder.svg']);
+    expect(writeEnsembleFigures({ ...result, errors: [] }, dir, { idPrefix: 'x-' })).toEqual(['ensemble-sheet-1.svg', 'energy-ladder.svg']);
     const sheet = readFileSync(join(dir, 'ensemble-sheet-1.svg'), 'utf8');
     const ladder = readFileSync(join(dir, 'energy-ladder.svg'), 'utf8');
     expect(xmlProblems(sheet)).toEqual([]);

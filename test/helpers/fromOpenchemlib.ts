@@ -7,6 +7,10 @@ import { ConformerGenerator, ForceFieldMMFF94, Molecule as OclMolecule, Resource
 import type { Bond, Molecule } from '../../src/model/molecule.js';
 
 let registered = false;
+const register = (): void => {
+  if (!registered) Resources.registerFromNodejs();
+  registered = true;
+};
 
 /** Converts an openchemlib molecule (with 3D coordinates) into a conformark Molecule. */
 export function fromOpenchemlib(ocl: OclMolecule, title = ''): Molecule {
@@ -46,10 +50,7 @@ export interface OclConformer {
  * Up to `count` conformers of `smiles` (fixed seed), each minimised with MMFF94s, sorted by energy (lowest first).
  */
 export function minimisedConformers(smiles: string, count = 5, seed = 1234): OclConformer[] {
-  if (!registered) {
-    Resources.registerFromNodejs();
-    registered = true;
-  }
+  register();
   const base = OclMolecule.fromSmiles(smiles);
   const generator = new ConformerGenerator(seed);
   generator.initializeConformers(base);
@@ -66,4 +67,15 @@ export function minimisedConformers(smiles: string, count = 5, seed = 1234): Ocl
     out.push({ mol: fromOpenchemlib(conf, smiles), energy: ff.getTotalEnergy(), rings });
   }
   return out.sort((a, b) => a.energy - b.energy);
+}
+
+/** First conformer of a SMILES (fixed seed), minimised with MMFF94s. */
+export function mmffConformer(smiles: string, seed = 1234): Molecule {
+  register();
+  const mol = OclMolecule.fromSmiles(smiles);
+  const gen = new ConformerGenerator(seed);
+  const conf = gen.getOneConformerAsMolecule(mol);
+  if (!conf) throw new Error(`openchemlib made no conformer for ${smiles}`);
+  new ForceFieldMMFF94(conf, 'MMFF94s').minimise();
+  return fromOpenchemlib(conf, smiles);
 }

@@ -6,15 +6,18 @@ import { registerNewman } from './newman.js';
 import { registerChair } from './chair.js';
 import { registerBatch } from './batch.js';
 import { registerEnsemble } from './ensemble.js';
+import { registerTrajectory } from './trajectory.js';
+import { registerDemo } from './demo.js';
 
 export type RegisterCommand = (program: Command) => void;
 
 export const COMMANDS = new Map<string, RegisterCommand>([
-  // each command file adds one entry here, e.g. ['inspect', registerInspect]
   ['inspect', registerInspect],
   ['newman', registerNewman],
   ['build', registerBuild],
   ['chair', registerChair],
   ['batch', registerBatch],
   ['ensemble', registerEnsemble],
+  ['trajectory', registerTrajectory],
+  ['demo', registerDemo],
 ]);

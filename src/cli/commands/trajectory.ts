@@ -1,0 +1,80 @@
+/** `conformark trajectory FILE --ring R -d DIR`: ring puckering over every frame, tables and figures. */
+import type { Command } from 'commander';
+import cliProgress from 'cli-progress';
+import { analyzeTrajectory, FIGURE_FORMATS, parseTimestep, usageError, type FigureFormat } from '../../index.js';
+import { oneOf, printWarnings, wholeNumber } from '../options.js';
+
+interface TrajectoryFlags {
+  ring?: string;
+  dir: string;
+  stride?: string;
+  from?: string;
+  to?: string;
+  timestep?: string[];
+  torsion?: string[];
+  formats?: string;
+  theme?: string;
+}
+
+function formats(text: string | undefined): FigureFormat[] {
+  if (text === undefined) return ['svg'];
+  const words = text.split(',').map((w) => w.trim()).filter((w) => w !== '');
+  if (words.length === 0) throw usageError('bad-option', '--formats expects a list such as svg,png,pdf');
+  return [...new Set(words.map((w) => oneOf<FigureFormat>('--formats', w, [...FIGURE_FORMATS.keys()], 'svg')))];
+}
+
+/** A progress line on stderr (frames read, frames per second), only when stderr is a terminal. */
+function progress(): { update: (framesRead: number) => void; stop: () => void } {
+  if (!process.stderr.isTTY) return { update: () => {}, stop: () => {} };
+  const start = Date.now();
+  const bar = new cliProgress.SingleBar(
+    { format: 'conformark: {value} frames read | {fps} frames/s', stream: process.stderr, hideCursor: true, fps: 5 },
+    cliProgress.Presets.shades_classic,
+  );
+  bar.start(0, 0, { fps: 0 });
+  return {
+    update: (n) => bar.update(n, { fps: Math.round(n / Math.max(1e-3, (Date.now() - start) / 1000)) }),
+    stop: () => bar.stop(),
+  };
+}
+
+/** Adds the `trajectory` command to the program. */
+export function registerTrajectory(program: Command): void {
+  program
+    .command('trajectory')
+    .description('ring puckering over every frame of a trajectory: puckering.csv, summary.json and figures in a folder')
+    .argument('<file>', 'multi-frame XYZ, multi-MODEL PDB or multi-record SDF (.gz read transparently)')
+    .option('--ring <R>', 'ring number as inspect lists it, or an ordered atom list such as 1-2-3-4-5-6 (default 1)')
+    .requiredOption('-d, --dir <dir>', 'output folder (created)')
+    .option('--stride <n>', 'analyse every nth frame (default 1)')
+    .option('--from <n>', 'first frame to analyse, counted from 1 (default 1)')
+    .option('--to <n>', 'last frame to analyse (default: the last)')
+    .option('--timestep <value...>', 'time between frames with a unit, e.g. "2 ps" or 2ps (fs, ps, ns, us, ms, s)')
+    .option('--torsion <A-B-C-D...>', 'torsions to add as CSV columns (numbers from 1 or atom names); repeatable')
+    .option('--formats <list>', 'figure formats, comma-separated: svg, png, pdf (default svg)')
+    .option('--theme <name|path>', 'column (print), projector (slides), contrast (colour-blind-safe), or a theme .json file (default column)')
+    .action(async (file: string, flags: TrajectoryFlags) => {
+      const bar = progress();
+      try {
+        const summary = await analyzeTrajectory(file, {
+          dir: flags.dir,
+          ring: flags.ring ?? '1',
+          stride: flags.stride === undefined ? 1 : wholeNumber('--stride', flags.stride),
+          from: flags.from === undefined ? 1 : wholeNumber('--from', flags.from),
+          to: flags.to === undefined ? undefined : wholeNumber('--to', flags.to),
+          timestep: flags.timestep === undefined ? undefined : parseTimestep(flags.timestep.join(' ')),
+          torsions: flags.torsion ?? [],
+          formats: formats(flags.formats),
+          theme: flags.theme,
+          onProgress: (read) => bar.update(read),
+        });
+        bar.stop();
+        printWarnings(summary.warnings, file);
+        const top = Object.entries(summary.occupancy).sort((a, b) => b[1] - a[1]).map(([s, f]) => `${s} ${(f * 100).toFixed(1)}%`).join(', ');
+        process.stdout.write(`${summary.frames.analysed} frames analysed (${summary.ring.atoms.join('-')}): ${top}\n`);
+        process.stdout.write(`wrote ${summary.files.map((f) => `${flags.dir.replace(/\/$/, '')}/${f}`).join(', ')}\n`);
+      } finally {
+        bar.stop();
+      }
+    });
+}

@@ -1,0 +1,51 @@
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { ShapeTable, PLANAR_FORM, PUCKERED_FORM } from '../../src/analysis/shapeTable.js';
+import { classifyRing } from '../../src/analysis/ringShape.js';
+import { cremerPople, displacementsFromModes, ringFromDisplacements, sixRingModes } from '../../src/geometry/cremerPople.js';
+
+const SIX = ['O', '1', '2', '3', '4', '5'];
+const FIVE = ['1', '2', '3', '4', '5'];
+
+describe('ShapeTable', () => {
+  it('classify(Q, q2, θ, φ) gives the shape and descriptor of classifyRing for six-rings (fast-check, seed 21)', () => {
+    const table = new ShapeTable(SIX);
+    fc.assert(
+      fc.property(fc.double({ min: 0.02, max: 0.8, noNaN: true }), fc.double({ min: 0, max: 180, noNaN: true }), fc.double({ min: 0, max: 359.99, noNaN: true }), (Q, theta, phi) => {
+        const pk = cremerPople(ringFromDisplacements(displacementsFromModes(6, sixRingModes(Q, theta, phi))))!;
+        const ref = classifyRing(pk, SIX);
+        const form = table.classify(pk.Q, pk.amplitudes[0]!.q, pk.thetaDeg!, pk.amplitudes[0]!.phaseDeg!);
+        expect(table.shapeOf(form)).toBe(ref.shape);
+        expect(table.descriptorOf(form)).toBe(ref.descriptor);
+      }),
+      { seed: 21, numRuns: 400 },
+    );
+  });
+
+  it('classify gives the shape and descriptor of classifyRing for five-rings (fast-check, seed 22)', () => {
+    const table = new ShapeTable(FIVE);
+    fc.assert(
+      fc.property(fc.double({ min: 0.02, max: 0.6, noNaN: true }), fc.double({ min: 0, max: 359.99, noNaN: true }), (q, phi) => {
+        const pk = cremerPople(ringFromDisplacements(displacementsFromModes(5, [{ m: 2, q, phaseDeg: phi }])))!;
+        const ref = classifyRing(pk, FIVE);
+        const form = table.classify(pk.Q, pk.amplitudes[0]!.q, NaN, pk.amplitudes[0]!.phaseDeg!);
+        expect(table.shapeOf(form)).toBe(ref.shape);
+        expect(table.descriptorOf(form)).toBe(ref.descriptor);
+      }),
+      { seed: 22, numRuns: 300 },
+    );
+  });
+
+  it('classify names the pyranose chairs 4C1 and 1C4 (METHODS.md §3.3, derived)', () => {
+    const table = new ShapeTable(SIX);
+    expect(table.descriptorOf(table.classify(0.57, 0.01, 2, 0))).toBe('4C1');
+    expect(table.descriptorOf(table.classify(0.57, 0.01, 178, 0))).toBe('1C4');
+  });
+
+  it('classify returns PLANAR_FORM below 0.1 Å and PUCKERED_FORM for other ring sizes', () => {
+    expect(new ShapeTable(SIX).classify(0.05, 0.01, 50, 10)).toBe(PLANAR_FORM);
+    const seven = new ShapeTable(['1', '2', '3', '4', '5', '6', '7']);
+    expect(seven.classify(0.6, 0.3, NaN, 10)).toBe(PUCKERED_FORM);
+    expect(seven.shapeOf(PUCKERED_FORM)).toBe('puckered');
+  });
+});

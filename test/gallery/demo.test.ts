@@ -1,0 +1,40 @@
+/** `conformark demo` renders the bundled scenario, and the committed gallery/ is exactly what it produces. */
+import { describe, expect, it } from 'vitest';
+import { mkdtempSync, readFileSync, readdirSync, rmSync, statSync, writeFileSync, mkdirSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join, relative } from 'node:path';
+import { renderDemo } from '../../src/api/demo.js';
+
+const walk = (dir: string, root = dir): string[] =>
+  readdirSync(dir).flatMap((n) => (statSync(join(dir, n)).isDirectory() ? walk(join(dir, n), root) : [relative(root, join(dir, n))])).sort();
+
+describe('renderDemo', () => {
+  it('renderDemo writes the same files, byte for byte, as the committed gallery/', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'conformark-demo-'));
+    try {
+      const result = await renderDemo({ outDir: dir, examplesDir: 'examples' });
+      expect(result.files).toContain('index.html');
+      const committed = walk('gallery');
+      expect(walk(dir)).toEqual(committed);
+      const differ = committed.filter((f) => !readFileSync(join(dir, f)).equals(readFileSync(join('gallery', f))));
+      expect(differ).toEqual([]);
+      for (const f of committed.filter((x) => x.endsWith('.svg') || x.endsWith('.json') || x.endsWith('.html'))) {
+        expect(readFileSync(join(dir, f), 'utf8')).not.toMatch(/NaN|Infinity|undefined|<script|javascript:/);
+      }
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
+  }, 240_000);
+
+  it('renderDemo refuses a non-empty folder it did not make, and deletes nothing there', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'conformark-demo-'));
+    try {
+      mkdirSync(join(dir, 'mine'));
+      writeFileSync(join(dir, 'mine', 'notes.txt'), 'keep me');
+      await expect(renderDemo({ outDir: dir, examplesDir: 'examples' })).rejects.toThrow(/not empty and was not made by conformark demo/);
+      expect(readFileSync(join(dir, 'mine', 'notes.txt'), 'utf8')).toBe('keep me');
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
+  });
+});
