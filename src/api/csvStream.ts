@@ -4,6 +4,8 @@
  */
 import { closeSync, mkdirSync, openSync, renameSync, rmSync, writeSync } from 'node:fs';
 import { basename, dirname, join, resolve } from 'node:path';
+import { usageError } from '../model/errors.js';
+import { isProtected } from '../io/writeAtomic.js';
 
 const FLUSH_CHARS = 1 << 16;
 let counter = 0;
@@ -17,6 +19,7 @@ export class TextStream {
   private buffer = '';
 
   constructor(readonly path: string) {
+    if (isProtected(path)) throw usageError('overwrite-input', 'is an input of this run; refusing to overwrite it', path);
     const dir = dirname(resolve(path));
     mkdirSync(dir, { recursive: true });
     this.tmp = join(dir, `.${basename(path)}.${process.pid}.${++counter}.tmp`);

@@ -240,6 +240,19 @@ describe.concurrent('conformark never overwrites its input', () => {
   });
 });
 
+describe('conformark trajectory never overwrites its input', () => {
+  it('conformark trajectory puckering.csv -d . refuses to replace the input with its table', async () => {
+    const folder = mkdtempSync(join(dir, 'trajectory-'));
+    const frames = degenerateXyz().split('\n').slice(6, 34).join('\n'); // the two flat six-ring frames
+    writeFileSync(join(folder, 'puckering.csv'), `${frames}\n`);
+    const r = await cliInProcess(['trajectory', join(folder, 'puckering.csv'), '--ring', '1', '-d', folder]);
+    expect(r.stderr).toBe(`conformark: ${join(folder, 'puckering.csv')}: is an input of this run; refusing to overwrite it\n`);
+    expect(r.status).toBe(2);
+    expect(readFileSync(join(folder, 'puckering.csv'), 'utf8')).toBe(`${frames}\n`);
+    expect(readdirSync(folder).filter((f) => f.endsWith('.tmp'))).toEqual([]);
+  });
+});
+
 describe('conformark on degenerate geometry', () => {
   let input = '';
   beforeAll(() => {
@@ -261,6 +274,19 @@ describe('conformark on degenerate geometry', () => {
     ['chair', '--record', '3', '--json'],
     ['chair', '--record', '4', '--view', 'projected'],
   ];
+
+  it('conformark trajectory on flat and nearly flat six-rings writes clean tables and figures', async () => {
+    const out = mkdtempSync(join(dir, 'trajectory-degenerate-'));
+    const frames = degenerateXyz().split('\n').slice(6, 34).join('\n');
+    writeFileSync(join(out, 'flat.xyz'), `${frames}\n`);
+    const r = await cliInProcess(['trajectory', join(out, 'flat.xyz'), '--ring', '1', '-d', join(out, 'result')]);
+    expect(r.status).toBe(0);
+    for (const file of readdirSync(join(out, 'result'))) {
+      const text = readFileSync(join(out, 'result', file), 'utf8');
+      expect(leaks(text), file).toEqual([]);
+      expect(unsafeMarkup(text), file).toEqual([]);
+    }
+  });
 
   it.each(RUNS)('conformark %s … writes no NaN, Infinity or undefined and says what is wrong', async (command, ...rest) => {
     const r = await cliInProcess([command!, input, ...rest]);

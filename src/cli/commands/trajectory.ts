@@ -1,8 +1,8 @@
 /** `conformark trajectory FILE --ring R -d DIR`: ring puckering over every frame, tables and figures. */
 import type { Command } from 'commander';
 import cliProgress from 'cli-progress';
-import { analyzeTrajectory, FIGURE_FORMATS, parseTimestep, usageError, type FigureFormat } from '../../index.js';
-import { oneOf, printWarnings, wholeNumber } from '../options.js';
+import { analyzeTrajectory, FIGURE_FORMATS, parseTimestep, protectInput, usageError, type FigureFormat } from '../../index.js';
+import { limitsOf, oneOf, printWarnings, wholeNumber } from '../options.js';
 
 interface TrajectoryFlags {
   ring?: string;
@@ -53,7 +53,9 @@ export function registerTrajectory(program: Command): void {
     .option('--torsion <A-B-C-D...>', 'torsions to add as CSV columns (numbers from 1 or atom names); repeatable')
     .option('--formats <list>', 'figure formats, comma-separated: svg, png, pdf (default svg)')
     .option('--theme <name|path>', 'column (print), projector (slides), contrast (colour-blind-safe), or a theme .json file (default column)')
-    .action(async (file: string, flags: TrajectoryFlags) => {
+    .action(async (file: string, flags: TrajectoryFlags, command: Command) => {
+      protectInput(file);
+      const { read } = limitsOf(command);
       const bar = progress();
       try {
         const summary = await analyzeTrajectory(file, {
@@ -66,6 +68,7 @@ export function registerTrajectory(program: Command): void {
           torsions: flags.torsion ?? [],
           formats: formats(flags.formats),
           theme: flags.theme,
+          read,
           onProgress: (read) => bar.update(read),
         });
         bar.stop();
