@@ -19,7 +19,7 @@ export class TextStream {
   private buffer = '';
 
   constructor(readonly path: string) {
-    if (isProtected(path)) throw usageError('overwrite-input', 'is an input of this run; refusing to overwrite it', path);
+    if (isProtected(path)) throw usageError('overwrite-input', 'refusing to overwrite the input file', path);
     const dir = dirname(resolve(path));
     mkdirSync(dir, { recursive: true });
     this.tmp = join(dir, `.${basename(path)}.${process.pid}.${++counter}.tmp`);

@@ -58,9 +58,9 @@ export function tableCsv(table: Table): string {
   return `${lines.join('\n')}\n`;
 }
 
-// Markdown renderers pass raw HTML through: `<`, `>` and `&` become entities, controls and bidi overrides U+FFFD
+// Markdown renderers pass raw HTML through: `<` and `>` become entities, controls and bidi overrides U+FFFD
 const mdField = (text: string) =>
-  safeText(text, Number.POSITIVE_INFINITY).text.replace(/\\/g, '\\\\').replace(/\|/g, '\\|').replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;');
+  safeText(text, Number.POSITIVE_INFINITY).text.replace(/\\/g, '\\\\').replace(/\|/g, '\\|').replace(/</g, '&lt;').replace(/>/g, '&gt;');
 
 /** Markdown: caption as a bold line, pipe table, numbers right-aligned, `–` for no value. */
 export function tableMarkdown(table: Table): string {

@@ -76,7 +76,7 @@ function removeQuietly(path: string): void {
  */
 export function writeAtomic(path: string, data: string | Uint8Array): void {
   if (isProtected(path)) {
-    throw usageError('overwrite-input', 'is an input of this run; refusing to overwrite it', path);
+    throw usageError('overwrite-input', 'refusing to overwrite the input file', path);
   }
   if (existsSync(path) && statSync(path).isDirectory()) {
     throw usageError('write-failed', 'is a folder; give a file name to write to', path);

@@ -10,6 +10,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { linkSync, mkdtempSync, readdirSync, readFileSync, rmSync, symlinkSync, writeFileSync, copyFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { COMMANDS } from '../../src/cli/commands/index.js';
 import { cli, cliInProcess, degenerateXyz, leaks, unsafeMarkup } from './robustnessHelpers.js';
 
 const BAD = 'test/data/bad';
@@ -166,7 +167,7 @@ describe('conformark bad selections and usage', () => {
     ['missing argument', ['inspect'], 'missing the <file> argument; see conformark inspect --help'],
     ['missing required option', ['newman', water], '--bond <A-B> is required; see conformark newman --help'],
     ['option without its value', ['newman', water, '--bond'], '--bond needs a value; see conformark newman --help'],
-    ['no command', [], 'no command given (commands: inspect, newman, build, chair, batch, ensemble); see conformark --help'],
+    ['no command', [], `no command given (commands: ${[...COMMANDS.keys()].join(', ')}); see conformark --help`],
     ['user error with --debug: still one line', ['--debug', 'newman', water, '--bond', '1-9'], `${water}: atom 9 does not exist (the record has 3 atoms)`],
     ['--debug after the command', ['newman', water, '--bond', '2-3', '--debug'], `${water}: atoms 2 and 3 are not bonded`],
   ];
@@ -206,7 +207,7 @@ describe.concurrent('conformark never overwrites its input', () => {
     const outputs = ['in.xyz', './in.xyz', `../${folder.split('/').pop()}/in.xyz`, input, 'soft.xyz', 'hard.xyz'];
     for (const out of outputs) {
       const r = await cli(['inspect', 'in.xyz', '--json', '-o', out], { cwd: folder });
-      expect(r.stderr).toBe(`conformark: ${out}: is an input of this run; refusing to overwrite it\n`);
+      expect(r.stderr).toBe(`conformark: ${out}: refusing to overwrite the input file\n`);
       expect(r.status).toBe(2);
     }
     const viaLink = await cli(['newman', 'soft.xyz', '--bond', '1-2', '--json', '-o', 'in.xyz'], { cwd: folder });
@@ -246,7 +247,7 @@ describe('conformark trajectory never overwrites its input', () => {
     const frames = degenerateXyz().split('\n').slice(6, 34).join('\n'); // the two flat six-ring frames
     writeFileSync(join(folder, 'puckering.csv'), `${frames}\n`);
     const r = await cliInProcess(['trajectory', join(folder, 'puckering.csv'), '--ring', '1', '-d', folder]);
-    expect(r.stderr).toBe(`conformark: ${join(folder, 'puckering.csv')}: is an input of this run; refusing to overwrite it\n`);
+    expect(r.stderr).toBe(`conformark: ${join(folder, 'puckering.csv')}: refusing to overwrite the input file\n`);
     expect(r.status).toBe(2);
     expect(readFileSync(join(folder, 'puckering.csv'), 'utf8')).toBe(`${frames}\n`);
     expect(readdirSync(folder).filter((f) => f.endsWith('.tmp'))).toEqual([]);

@@ -117,7 +117,7 @@ describe('fuzzing the CLI-level API', () => {
         try {
           const report = await inspectFile(path, { couplings });
           expect(leaks(jsonText(report))).toEqual([]);
-          expect(inspectText(report)).not.toMatch(PROSE_LEAK);
+          expect(inspectText(report).replace(/"[^"\n]*"/g, '""')).not.toMatch(PROSE_LEAK); // titles are the file's text
         } catch (err) {
           expectUserError(err);
         } finally {

@@ -140,7 +140,7 @@ describe('LineSplitter', () => {
   it('LineSplitter.pushBytes(invalid UTF-8) is one binary-input error', () => {
     const s = new LineSplitter('f.xyz', 100);
     expect(() => s.pushBytes(Uint8Array.from([0x33, 0x0a, 0xff, 0xfe]))).toThrow(
-      'f.xyz:1: this is not a text file (NUL bytes or invalid UTF-8); expected XYZ, SDF/molfile or PDB text',
+      'f.xyz:2: this is not a text file (NUL bytes or invalid UTF-8); expected XYZ, SDF/molfile or PDB text',
     );
   });
 });
