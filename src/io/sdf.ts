@@ -60,6 +60,7 @@ export class SdfConsumer implements LineConsumer {
   private builder!: RecordBuilder;
   private v3000: V3000Reader | null = null;
   private properties: Record<string, string> = {};
+  private dataChars = 0;
   private field: string | null = null;
   private value: string | null = null;
   private stopped = false;
@@ -92,7 +93,7 @@ export class SdfConsumer implements LineConsumer {
       case State.Props:
         return this.propLine(text, start, end, lineNo);
       case State.Data:
-        return this.dataLine(text, start, end);
+        return this.dataLine(text, start, end, lineNo);
       case State.Skip:
         return;
     }
@@ -194,7 +195,7 @@ export class SdfConsumer implements LineConsumer {
     }
     if (starts(text, start, end, '> ') || (end - start === 1 && text.charCodeAt(start) === 62)) {
       this.state = State.Data; // lenient: a missing `M  END` before the data fields
-      return this.dataLine(text, start, end);
+      return this.dataLine(text, start, end, lineNo);
     }
     if (starts(text, start, end, 'M  CHG')) {
       const line = text.slice(start, end);
@@ -221,7 +222,12 @@ export class SdfConsumer implements LineConsumer {
     }
   }
 
-  private dataLine(text: string, start: number, end: number): void {
+  private dataLine(text: string, start: number, end: number, lineNo: number): void {
+    // the data block is the one part of a record without a count: bound it (10 lines' worth of the line limit)
+    this.dataChars += end - start + 1;
+    if (this.dataChars > 10 * this.limits.maxLineLength) {
+      return this.fail(issue('data-too-long', this.file, lineNo, `the SD data fields of record ${this.record} are longer than ${10 * this.limits.maxLineLength} characters (10 × option maxLineLength)`));
+    }
     if (this.field === null) {
       if (starts(text, start, end, '$$$$')) return this.endOfRecord();
       if (text.charCodeAt(start) === 62 && start < end) {
@@ -235,7 +241,7 @@ export class SdfConsumer implements LineConsumer {
       return;
     }
     if (isBlankLine(text, start, end) || starts(text, start, end, '$$$$')) {
-      this.properties[this.field] = this.value ?? '';
+      setField(this.properties, this.field, this.value ?? '');
       this.field = null;
       if (starts(text, start, end, '$$$$')) this.endOfRecord();
       return;
@@ -256,7 +262,7 @@ export class SdfConsumer implements LineConsumer {
   }
 
   private finish(): void {
-    if (this.field !== null) this.properties[this.field] = this.value ?? '';
+    if (this.field !== null) setField(this.properties, this.field, this.value ?? '');
     const title = this.title.trim();
     const result: Molecule | Issue = this.builder.finish(title, this.properties, this.record, this.start, true);
     if ('code' in result) this.fail(result);
@@ -288,9 +294,15 @@ export class SdfConsumer implements LineConsumer {
     this.headerBlank = true;
     this.v3000 = null;
     this.properties = {};
+    this.dataChars = 0;
     this.field = null;
     this.value = null;
     this.bondsRead = 0;
     this.chargesReset = false;
   }
+}
+
+/** Stores a data field as an own property, also when it is named `__proto__` (plain assignment would drop it). */
+function setField(properties: Record<string, string>, name: string, value: string): void {
+  Object.defineProperty(properties, name, { value, enumerable: true, writable: true, configurable: true });
 }

@@ -127,6 +127,16 @@ describe('conformark limits', () => {
     expect(piped.status).toBe(2);
   });
 
+  it('conformark inspect on an SD record with a 1.2 MB data field stops with data-too-long at the line it passes the cap', async () => {
+    const path = join(dir, 'big-field.sdf');
+    const water = readFileSync('test/data/good-water.sdf', 'utf8');
+    writeFileSync(path, water.replace('$$$$', `> <notes>\n${`${'x'.repeat(999)}\n`.repeat(1200)}\n$$$$`));
+    const r = await cliInProcess(['inspect', path]);
+    const line = water.split('\n').findIndex((l) => l === '$$$$') + 1 + 1000; // the field name line, then 1000 lines of 1000 characters
+    expect(r.stderr).toBe(`conformark: ${path}:${line}: the SD data fields of record 1 are longer than 1000000 characters (10 × option maxLineLength)\n`);
+    expect(r.status).toBe(2);
+  });
+
   it('conformark --max-records / --max-total-atoms / --max-atoms / --max-line-length stop with the limit named', async () => {
     const path = join(dir, 'three.xyz');
     writeFileSync(path, '3\nw1\nO 0 0 0\nH 0.96 0 0\nH -0.24 0.93 0\n'.repeat(3));

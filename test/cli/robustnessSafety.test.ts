@@ -18,6 +18,7 @@ import { chairFigure } from '../../src/api/chair.js';
 import { ensembleText } from '../../src/api/ensembleText.js';
 import { tableMarkdown } from '../../src/api/tableText.js';
 import { protectInput, writeAtomic } from '../../src/io/writeAtomic.js';
+import { parseText } from '../../src/io/parseText.js';
 import { reportFailure, usageLine } from '../../src/cli/main.js';
 import { CommanderError } from 'commander';
 import { butane, cyclohexaneChair } from '../helpers/newmanMolecules.js';
@@ -198,6 +199,16 @@ describe('the failure shell', () => {
   it('usageLine turns commander messages into one line of ours with a help hint', () => {
     const err = new CommanderError(1, 'commander.unknownOption', "error: unknown option '--jsn'\n(Did you mean --json?)");
     expect(usageLine(err, 'inspect')).toBe("conformark: unknown option '--jsn' (did you mean --json?); see conformark inspect --help");
+  });
+});
+
+describe('SD data fields', () => {
+  it('parseText keeps a data field named __proto__ as a plain field and leaves the prototype alone', () => {
+    const water = readFileSync('test/data/good-water.sdf', 'utf8').replace('$$$$', '> <__proto__>\n{"polluted": true}\n\n$$$$');
+    const [mol] = parseText(water, { file: 'w.sdf' });
+    expect(mol!.properties['__proto__']).toBe('{"polluted": true}');
+    expect(Object.keys(mol!.properties)).toContain('__proto__');
+    expect(Object.getPrototypeOf(mol!.properties)).toBe(Object.prototype);
   });
 });
 
