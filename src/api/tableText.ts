@@ -49,7 +49,14 @@ function cellText(cell: TableCell, column: TableColumn): string | null {
   return typeof cell === 'number' ? fixed(cell, column.digits ?? 0) : cell;
 }
 
-const csvField = (text: string) => (/[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text);
+/**
+ * One CSV field, quoted when needed. Text (not a number) that starts with `=`, `+`, `-` or `@` would open as a
+ * formula in a spreadsheet: it gets a leading apostrophe (common practice, no source).
+ */
+const csvField = (text: string) => {
+  const safe = /^[=+\-@]/.test(text) && !Number.isFinite(Number(text)) ? `'${text}` : text;
+  return /[",\r\n]/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe;
+};
 
 /** CSV: header of column keys, one line per row, empty field for no value, `\n` line ends. */
 export function tableCsv(table: Table): string {

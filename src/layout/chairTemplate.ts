@@ -59,8 +59,10 @@ export function ringName(ring: Pick<RingAnalysis, 'id' | 'atoms'>): string {
 export function assertChair(ring: RingAnalysis): void {
   if (ring.shape === 'chair' && ring.size === 6) return;
   const form = ring.descriptor ? ` (${ring.descriptor})` : '';
-  const article = /^[aeiou]/.test(ring.shape) ? 'an' : 'a';
-  throw usageError('not-a-chair', `${ringName(ring)} is ${article} ${ring.shape}${form}, not a chair: use --view projected`);
+  // "is planar", "is puckered"; "is a twist-boat", "is an envelope"
+  const adjective = ring.shape === 'planar' || ring.shape === 'puckered';
+  const article = adjective ? '' : /^[aeiou]/.test(ring.shape) ? 'an ' : 'a ';
+  throw usageError('not-a-chair', `${ringName(ring)} is ${article}${ring.shape}${form}, not a chair: use --view projected`);
 }
 
 /**

@@ -13,6 +13,7 @@ import {
   type RingHydrogens,
   type RingLabels,
   type RingView,
+  jsonText,
 } from '../../index.js';
 import { finiteNumber, limitsOf, oneOf, printWarnings, wholeNumber } from '../options.js';
 
@@ -67,7 +68,7 @@ export function registerChair(program: Command): void {
       printWarnings(figure.warnings, `${file}: record ${recordNumber}`);
       if (flags.json) {
         const report = { schema: 'conformark/chair@1', record: recordNumber, ring: toReportRing(figure.ring), placement: toPlacementJson(figure.placement) };
-        const text = `${JSON.stringify(report, null, 2)}\n`;
+        const text = jsonText(report);
         if (flags.output) writeAtomic(flags.output, text);
         else process.stdout.write(text);
         return;

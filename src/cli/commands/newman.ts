@@ -21,6 +21,7 @@ import {
   type NewmanAngles,
   type NewmanHydrogens,
   type NewmanLabels,
+  jsonText,
 } from '../../index.js';
 import { limitsOf, oneOf, printWarnings, wholeNumber } from '../options.js';
 
@@ -73,7 +74,7 @@ export function registerNewman(program: Command): void {
         const view = newmanView(mol, graph, front, back, { up, rings });
         const predicted = couplingsAcrossBond(mol, graph, front, back, { method }).filter((c): c is Coupling => !isSkippedCoupling(c));
         printWarnings([...view.warnings, ...predicted.flatMap((c) => c.warnings)]);
-        const text = `${JSON.stringify(toNewmanJson(view, mol, { couplings: predicted }), null, 2)}\n`;
+        const text = jsonText(toNewmanJson(view, mol, { couplings: predicted }));
         if (flags.output) writeAtomic(flags.output, text);
         else process.stdout.write(text);
         return;
