@@ -1,5 +1,6 @@
 /** Built-in themes (templates/*.json) and loading a theme by name or path. */
-import { readFileSync } from 'node:fs';
+import { readFileSync, statSync } from 'node:fs';
+import { resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { usageError } from '../model/errors.js';
 import type { SceneMetrics, TextStyle } from '../layout/scene.js';
@@ -53,7 +54,25 @@ export function loadTheme(theme: Theme | string = DEFAULT_THEME): Theme {
   if (!/[\\/]|\.json$/i.test(theme)) {
     throw usageError('unknown-theme', `unknown theme "${theme}" (built-in: ${[...THEMES.keys()].join(', ')}; or give a path to a .json file)`);
   }
-  return readTheme(theme, theme);
+  return themeFile(theme);
+}
+
+/** Theme files by absolute path, kept while the file's mtime and size stay the same. */
+const files = new Map<string, { mtimeMs: number; size: number; theme: Theme }>();
+
+function themeFile(path: string): Theme {
+  const key = resolve(path);
+  let stat;
+  try {
+    stat = statSync(key);
+  } catch {
+    throw usageError('bad-theme', `cannot read the theme file`, path);
+  }
+  const hit = files.get(key);
+  if (hit && hit.mtimeMs === stat.mtimeMs && hit.size === stat.size) return hit.theme;
+  const theme = readTheme(path, path);
+  files.set(key, { mtimeMs: stat.mtimeMs, size: stat.size, theme });
+  return theme;
 }
 
 /** Text style of a role in a theme: role entry over the text defaults. */
@@ -64,9 +83,19 @@ export function themeTextStyle(theme: Theme, role: string): TextStyle {
 
 /**
  * The numbers a layout needs from a theme: base length, clearances, thickest stroke and every text role's
- * size. Layouts take these instead of the theme, so they stay independent of rendering.
+ * size. Layouts take these instead of the theme, so they stay independent of rendering. Computed once per
+ * theme object.
  */
 export function sceneMetrics(theme: Theme): SceneMetrics {
+  let metrics = metricsCache.get(theme);
+  if (!metrics) metricsCache.set(theme, (metrics = metricsOf(theme)));
+  return metrics;
+}
+
+/** Metrics per theme object (validated themes are not changed after loading). */
+const metricsCache = new WeakMap<Theme, SceneMetrics>();
+
+function metricsOf(theme: Theme): SceneMetrics {
   const styles = [...Object.values(theme.defaults), ...Object.values(theme.roles)];
   const text: Record<string, TextStyle> = { default: themeTextStyle(theme, '') };
   for (const role of Object.keys(theme.roles)) text[role] = themeTextStyle(theme, role);
