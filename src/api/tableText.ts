@@ -50,11 +50,13 @@ function cellText(cell: TableCell, column: TableColumn): string | null {
 }
 
 /**
- * One CSV field, quoted when needed. Text (not a number) that starts with `=`, `+`, `-` or `@` would open as a
- * formula in a spreadsheet: it gets a leading apostrophe (common practice, no source).
+ * One CSV field, quoted when needed. Text that a spreadsheet would run as a formula (starting with `=` or `@`,
+ * or with `+`/`-` and containing a call or pipe such as `+cmd|…` or `-HYPERLINK(…)`) gets a leading apostrophe;
+ * numbers and the Klyne–Prelog labels `+sc`, `-ac` stay as they are (common practice, no source).
  */
 const csvField = (text: string) => {
-  const safe = /^[=+\-@]/.test(text) && !Number.isFinite(Number(text)) ? `'${text}` : text;
+  const formula = /^[=@]/.test(text) || (/^[+-]/.test(text) && /[()!|=]/.test(text) && !Number.isFinite(Number(text)));
+  const safe = formula ? `'${text}` : text;
   return /[",\r\n]/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe;
 };
 

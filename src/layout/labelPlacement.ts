@@ -85,6 +85,20 @@ export function firstFree(candidates: readonly Box[], obstacles: Obstacles, clea
 }
 
 /**
+ * The first candidate box that, grown by `clearance`, is free of the obstacles; the last one when none is.
+ * Takes candidates made on demand, so a label placed at once costs one test.
+ */
+export function firstFreeOf(candidates: Iterable<Box>, obstacles: Obstacles, clearance: number): Box {
+  let last: Box | undefined;
+  for (const b of candidates) {
+    if (isFree(grow(b, clearance), obstacles)) return b;
+    last = b;
+  }
+  if (!last) throw new Error('firstFreeOf: no candidates');
+  return last;
+}
+
+/**
  * Distance from a box centre to its edge along the unit direction (ux, uy), for a box of half sizes hw, hh:
  * puts a label just beyond a bond end in any direction.
  */

@@ -38,21 +38,33 @@ export const boxAt = (cx: number, cy: number, t: TextBox): Box => ({ x0: cx - t.
 
 const RAD = Math.PI / 180;
 
+const TURNS = [0, 6, -6, 12, -12, 18, -18];
+const PUSHES = 31;
+
 /**
- * Candidate centres for a label beyond radius `from` along azimuth `azDeg` (about cx, cy), best first:
- * straight out just past the end, then turned by up to ±18° and pushed outward step by step.
+ * Preference order of the candidates as [push step k, turn index]: cost k + |turn| / 4, ties in generation
+ * order (k outer, turns inner). Fixed, so it is sorted once instead of once per label.
  */
-export function rayCandidates(cx: number, cy: number, azDeg: number, from: number, t: TextBox, step: number): Box[] {
-  const scored: { cost: number; box: Box }[] = [];
-  for (let k = 0; k <= 30; k++) {
-    for (const dev of [0, 6, -6, 12, -12, 18, -18]) {
-      const a = (azDeg + dev) * RAD;
+const ORDER: readonly (readonly [number, number])[] = Array.from({ length: PUSHES * TURNS.length }, (_, n) => [Math.floor(n / TURNS.length), n % TURNS.length] as const)
+  .map((kt) => ({ kt, cost: kt[0] + Math.abs(TURNS[kt[1]]!) / 4 }))
+  .sort((p, q) => p.cost - q.cost)
+  .map((s) => s.kt);
+
+/**
+ * Candidate label boxes beyond radius `from` along azimuth `azDeg` (about cx, cy), best first and made on
+ * demand: straight out just past the end, then turned by up to ±18° and pushed outward step by step.
+ */
+export function* rayCandidates(cx: number, cy: number, azDeg: number, from: number, t: TextBox, step: number): Generator<Box, void, undefined> {
+  const dirs: ({ ux: number; uy: number; reach: number } | undefined)[] = [];
+  for (const [k, turn] of ORDER) {
+    let dir = dirs[turn];
+    if (!dir) {
+      const a = (azDeg + TURNS[turn]!) * RAD;
       const ux = Math.sin(a);
       const uy = -Math.cos(a);
-      const d = from + reachToEdge(t.width / 2, t.height / 2, ux, uy) + k * step;
-      scored.push({ cost: k + Math.abs(dev) / 4, box: boxAt(cx + d * ux, cy + d * uy, t) });
+      dir = dirs[turn] = { ux, uy, reach: reachToEdge(t.width / 2, t.height / 2, ux, uy) };
     }
+    const d = from + dir.reach + k * step;
+    yield boxAt(cx + d * dir.ux, cy + d * dir.uy, t);
   }
-  // stable sort keeps the generation order for equal costs: deterministic
-  return scored.sort((p, q) => p.cost - q.cost).map((s) => s.box);
 }

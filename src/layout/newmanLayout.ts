@@ -10,7 +10,7 @@ import type { NewmanView } from '../analysis/newman.js';
 import { wrap180 } from '../geometry/vec3.js';
 import { drawnAzimuths, type NewmanAngles } from './newmanAngles.js';
 import { atomLabelText, boxAt, rayCandidates, textBox, type NewmanLabels } from './newmanLabels.js';
-import { firstFree, grow, type Box, type Obstacles } from './labelPlacement.js';
+import { firstFreeOf, grow, type Box, type Obstacles } from './labelPlacement.js';
 import { torsionArcPath, torsionArcPoints } from './torsionArc.js';
 import { approximateMeasure, DEFAULT_METRICS, shiftItem, textStyle, type Scene, type SceneItem, type SceneMetrics, type TextMeasure } from './scene.js';
 import { couplingLines, newmanCaption, newmanDescription, torsionText } from './newmanText.js';
@@ -126,9 +126,9 @@ export function layoutNewman(view: NewmanView, mol: Molecule, options: NewmanLay
   const clearance = metrics.gap * 0.6 + metrics.lineWidth / 2;
   const textBoxes: Box[] = [];
   const labelStyle = textStyle(metrics, 'atom-label');
-  const place = (role: string, text: string, candidates: Box[], extra: Partial<Pick<SceneItem & { type: 'text' }, 'atom' | 'atoms'>>) => {
+  const place = (role: string, text: string, candidates: Iterable<Box>, extra: Partial<Pick<SceneItem & { type: 'text' }, 'atom' | 'atoms'>>) => {
     const t = textBox(text, textStyle(metrics, role), measure);
-    const box = candidates[firstFree(candidates, obstacles, clearance)]!;
+    const box = firstFreeOf(candidates, obstacles, clearance);
     obstacles.boxes.push(box);
     textBoxes.push(box);
     const style = textStyle(metrics, role);

@@ -1,14 +1,22 @@
 /**
- * Scene + theme → semantic SVG text with svg.js on svgdom (DESIGN.md "Figures"): every primitive carries its
- * role as `class`, bonds carry `data-atoms="i j"` (1-based, start atom first), labels `data-atom`; ids come
- * from the figure's own prefix; numbers are rounded here, once. No scripts, event attributes or external
- * references can arise: every attribute value is a number, an escaped string or a validated theme value.
+ * Scene + theme → semantic SVG text (DESIGN.md "Figures"): every primitive carries its role as `class`, bonds
+ * carry `data-atoms="i j"` (1-based, start atom first), labels `data-atom`; ids come from the figure's own
+ * prefix; numbers are rounded here, once. No scripts, event attributes or external references can arise:
+ * every attribute value is a number, an escaped string or a validated theme value.
+ *
+ * Why strings and not svg.js here: the markup is the bytes svg.js 3.2.8 on svgdom 0.1.24 produced for the same
+ * calls (canvas.line/path/circle/plain + attr, then svg() without `data-svgjs`), but building, cloning and
+ * serialising svgdom nodes cost more than half of every figure (batch bench). The rules that svg.js applies
+ * (number text, colour normalising, escaping, attribute order) live in svgMarkup.ts; a property test renders
+ * random scenes both ways and compares bytes, and the goldens pin them. svg.js stays where a DOM is needed:
+ * text measurement (svgWindow.ts).
  */
+import { PathArray } from '@svgdotjs/svg.js';
 import type { Scene, SceneItem } from '../layout/scene.js';
 import { usageError } from '../model/errors.js';
 import type { Primitive, RoleStyle, Theme } from './theme.js';
 import { loadTheme } from './themes.js';
-import { sharedCanvas } from './svgWindow.js';
+import { attrText, escapeXml, svgNumber, svgValue } from './svgMarkup.js';
 import { MAX_LABEL_LENGTH, safeText } from '../layout/safeText.js';
 
 /** Longest `<title>`/`<desc>` written, characters (labels: `MAX_LABEL_LENGTH`). */
@@ -45,7 +53,23 @@ function styleAttrs(style: RoleStyle, kind: Primitive, theme: Theme, round: (x: 
   return a;
 }
 
-const ids = (atoms: readonly number[] | undefined) => (atoms?.length ? { 'data-atoms': atoms.map((i) => i + 1).join(' ') } : {});
+/** Style attribute text per theme, digits, primitive and role: themes are immutable once validated. */
+const styleCache = new WeakMap<Theme, Map<string, string>>();
+
+function styleText(theme: Theme, kind: Primitive, role: string, digits: number, round: (x: number) => number): string {
+  let byKey = styleCache.get(theme);
+  if (!byKey) styleCache.set(theme, (byKey = new Map()));
+  const key = `${digits}\u0000${kind}\u0000${role}`;
+  let text = byKey.get(key);
+  if (text === undefined) {
+    text = attrText(styleAttrs({ ...theme.defaults[kind], ...theme.roles[role] }, kind, theme, round));
+    byKey.set(key, text);
+  }
+  return text;
+}
+
+const atomList = (atoms: readonly number[] | undefined) => (atoms?.length ? ` data-atoms="${atoms.map((i) => i + 1).join(' ')}"` : '');
+const atomOne = (atom: number | undefined) => (atom === undefined ? '' : ` data-atom="${svgNumber(atom + 1)}"`);
 
 /**
  * Serialises a Scene with a theme (a Theme, a built-in name or a path; default `column`).
@@ -56,48 +80,38 @@ export function renderSvg(scene: Scene, theme: Theme | string = 'column', option
   const t = loadTheme(theme);
   const prefix = options.idPrefix ?? `${scene.kind}-`;
   if (!ID_PREFIX.test(prefix)) throw usageError('bad-id-prefix', `id prefix "${prefix}" must start with a letter or _ and use only letters, digits, _ and -`);
-  const round = roundTo(options.digits ?? 2);
-  const canvas = sharedCanvas();
-  canvas.clear();
-  const root = canvas.node;
-  for (const name of Array.from(root.attributes, (a) => a.name)) if (name !== 'xmlns') root.removeAttribute(name);
+  const digits = options.digits ?? 2;
+  const round = roundTo(digits);
   const w = round(scene.width);
   const h = round(scene.height);
-  canvas.attr({
+  let out = `<svg xmlns="http://www.w3.org/2000/svg"${attrText({
     width: `${w}${t.unit}`, height: `${h}${t.unit}`, viewBox: `0 0 ${w} ${h}`,
     class: `conformark ${scene.kind} theme-${t.name}`, role: 'img', 'aria-labelledby': `${prefix}title ${prefix}desc`,
-  });
+  })} version="1.1" xmlns:xlink="http://www.w3.org/1999/xlink">`;
   // last line of defence for text from files: no XML-invalid or direction-changing characters, bounded length
-  canvas.element('title').attr({ id: `${prefix}title` }).words(safeText(scene.title, MAX_DESCRIPTION_LENGTH).text);
-  canvas.element('desc').attr({ id: `${prefix}desc` }).words(safeText(scene.desc, MAX_DESCRIPTION_LENGTH).text);
-  if (t.background !== 'none') canvas.rect(w, h).attr({ class: 'background', x: 0, y: 0, fill: t.background });
-  for (const item of scene.items) drawItem(canvas, item, t, round);
-  return canvas.svg((node: { attr(name: string, value: null): unknown }) => {
-    node.attr('data-svgjs', null);
-  });
+  const title = safeText(scene.title, MAX_DESCRIPTION_LENGTH).text;
+  const desc = safeText(scene.desc, MAX_DESCRIPTION_LENGTH).text;
+  out += `<title id="${escapeXml(prefix)}title">${escapeXml(title)}</title><desc id="${escapeXml(prefix)}desc">${escapeXml(desc)}</desc>`;
+  if (t.background !== 'none') out += `<rect${attrText({ width: w, height: h, class: 'background', x: 0, y: 0, fill: t.background })}></rect>`;
+  for (const item of scene.items) out += itemText(item, styleText(t, item.type, item.role, digits, round), round);
+  return `${out}</svg>`;
 }
 
-function drawItem(canvas: ReturnType<typeof sharedCanvas>, item: SceneItem, theme: Theme, round: (x: number) => number): void {
-  const style = { ...theme.defaults[item.type], ...theme.roles[item.role] };
-  const attrs = styleAttrs(style, item.type, theme, round);
+/** svg.js draws an empty `d` as its own empty path array (`M0 0 `). */
+const EMPTY_PATH = new PathArray().toString();
+
+function itemText(item: SceneItem, style: string, round: (x: number) => number): string {
+  const role = escapeXml(item.role);
+  const n = (x: number) => svgNumber(round(x));
   switch (item.type) {
     case 'line':
-      canvas.line(round(item.x1), round(item.y1), round(item.x2), round(item.y2)).attr({ class: item.role, ...ids(item.atoms), ...attrs });
-      break;
+      return `<line x1="${n(item.x1)}" y1="${n(item.y1)}" x2="${n(item.x2)}" y2="${n(item.y2)}" class="${role}"${atomList(item.atoms)}${style}></line>`;
     case 'path':
-      canvas.path(item.d).attr({ class: item.role, ...ids(item.atoms), ...attrs });
-      break;
+      return `<path d="${escapeXml(item.d || EMPTY_PATH)}" class="${role}"${atomList(item.atoms)}${style}></path>`;
     case 'circle':
-      canvas.circle(round(2 * item.r)).attr({ cx: round(item.cx), cy: round(item.cy), class: item.role, ...(item.atom === undefined ? {} : { 'data-atom': item.atom + 1 }), ...attrs });
-      break;
-    case 'text': {
-      const weight = item.fontWeight === 'bold' ? { 'font-weight': 'bold' } : {};
-      canvas.plain(safeText(item.text, MAX_LABEL_LENGTH).text).attr({
-        x: round(item.x), y: round(item.y), 'text-anchor': item.anchor, class: item.role,
-        ...(item.atom === undefined ? {} : { 'data-atom': item.atom + 1 }), ...ids(item.atoms),
-        ...attrs, 'font-size': round(item.fontSize), ...weight,
-      });
-      break;
-    }
+      // svg.js circle(size) stores r = size / 2, then cx = cy = r before the given centre replaces them
+      return `<circle r="${svgNumber(svgValue(round(2 * item.r)) / 2)}" cx="${n(item.cx)}" cy="${n(item.cy)}" class="${role}"${atomOne(item.atom)}${style}></circle>`;
+    case 'text':
+      return `<text x="${n(item.x)}" y="${n(item.y)}" text-anchor="${escapeXml(item.anchor)}" class="${role}"${atomOne(item.atom)}${atomList(item.atoms)}${style} font-size="${n(item.fontSize)}"${item.fontWeight === 'bold' ? ' font-weight="bold"' : ''}>${escapeXml(safeText(item.text, MAX_LABEL_LENGTH).text)}</text>`;
   }
 }

@@ -1,6 +1,6 @@
 /**
  * One svgdom window for the whole process (reused: faster than a window per figure, LIBRARIES.md), with the
- * shipped DejaVu Sans mapped for text measurement.
+ * shipped DejaVu Sans mapped for text measurement. Only measuring needs it: renderSvg writes markup directly.
  */
 import { fileURLToPath } from 'node:url';
 import { createSVGWindow, config } from 'svgdom';
@@ -15,7 +15,7 @@ export const FONT_FILE_BOLD = fileURLToPath(new URL('../../fonts/DejaVuSans-Bold
 
 let canvas: Svg | undefined;
 
-/** The shared root `<svg>`, created on first use. Callers clear it before drawing. */
+/** The shared root `<svg>`, created on first use. Whoever adds to it removes what it added. */
 export function sharedCanvas(): Svg {
   if (!canvas) {
     // setFontDir replaces svgdom's own folder: every family we emit must be mapped or it measures as 0.

@@ -36,9 +36,9 @@ describe('table text', () => {
     expect(rows).toEqual([['name', 'angleDeg'], ['a_b, "c"', '0.0'], ['50% & #2', '180.0'], ['', '']]);
   });
 
-  it('tableCsv defuses text that a spreadsheet would run as a formula, and leaves negative numbers alone', () => {
-    const table: Table = { kind: 'demo', caption: '', columns: [{ key: 'title', label: 'title' }, { key: 'x', label: 'x', digits: 1 }], rows: [['=HYPERLINK("x")', -12.5], ['@sum', 3], ['-C1-', -1]] };
-    expect(parseCsv(tableCsv(table)).slice(1)).toEqual([["'=HYPERLINK(\"x\")", '-12.5'], ["'@sum", '3.0'], ["'-C1-", '-1.0']]);
+  it('tableCsv defuses text that a spreadsheet would run as a formula, and leaves numbers and Klyne–Prelog labels alone', () => {
+    const table: Table = { kind: 'demo', caption: '', columns: [{ key: 'title', label: 'title' }, { key: 'x', label: 'x', digits: 1 }], rows: [['=HYPERLINK("x")', -12.5], ['@sum', 3], ['+cmd|x!A0', -1], ['+sc', 2], ['-ac', 0]] };
+    expect(parseCsv(tableCsv(table)).slice(1)).toEqual([["'=HYPERLINK(\"x\")", '-12.5'], ["'@sum", '3.0'], ["'+cmd|x!A0", '-1.0'], ['+sc', '2.0'], ['-ac', '0.0']]);
   });
 
   it('tableLatex uses booktabs rules and escapes _ % & # in text', () => {

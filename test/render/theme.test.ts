@@ -1,4 +1,4 @@
-import { mkdtempSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, utimesSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
@@ -73,5 +73,24 @@ describe('themes', () => {
     expect(m.lineWidth).toBe(4);
     expect(m.text['torsion-label']).toEqual({ fontSize: 21, fontWeight: 'normal' });
     expect(m.text.default).toEqual({ fontSize: 26, fontWeight: 'normal' });
+  });
+
+  it('loadTheme keeps a theme file until its modification time or size changes', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'cmk-theme-'));
+    const file = join(dir, 'mine.json');
+    writeFileSync(file, JSON.stringify({ ...good(), name: 'mine' }));
+    const first = loadTheme(file);
+    expect(loadTheme(file)).toBe(first);
+    writeFileSync(file, JSON.stringify({ ...good(), name: 'mine-too' }));
+    expect(loadTheme(file).name).toBe('mine-too');
+    writeFileSync(file, JSON.stringify({ ...good(), name: 'mine-ter' })); // same size as before: the mtime tells
+    utimesSync(file, new Date(2000, 0, 1), new Date(2000, 0, 1));
+    expect(loadTheme(file).name).toBe('mine-ter');
+  });
+
+  it('sceneMetrics returns the same metrics object for the same theme object', () => {
+    const theme = loadTheme('column');
+    expect(sceneMetrics(theme)).toBe(sceneMetrics(theme));
+    expect(sceneMetrics({ ...theme, sizes: { ...theme.sizes, gap: 9 } }).gap).toBe(9);
   });
 });
