@@ -1,6 +1,10 @@
 /** Pairs of touching spheres by a uniform spatial grid, in linear time. */
+import { scratchFloat64, scratchInt32 } from './scratch.js';
 
-/** Pairs found by {@link nearPairs}: `i[k] < j[k]` at squared distance `d2[k]`, for k < `count`. */
+/**
+ * Pairs found by {@link nearPairs}: `i[k] < j[k]` at squared distance `d2[k]`, for k < `count`. The arrays
+ * are scratch (see scratch.ts): read them before the next call.
+ */
 export interface PairList {
   count: number;
   i: Int32Array;
@@ -34,7 +38,8 @@ export function nearPairs(coords: Float64Array, n: number, reach: Float64Array, 
   }
   const span = [0, 1, 2].map((d) => (n === 0 ? 1 : Math.floor((high[d]! - low[d]!) / size) + 1));
   const [nx, ny, nz] = span as [number, number, number];
-  const out: PairList = { count: 0, i: new Int32Array(2 * n + 16), j: new Int32Array(2 * n + 16), d2: new Float64Array(2 * n + 16) };
+  const room = 2 * n + 16;
+  const out: PairList = { count: 0, i: scratchInt32('pair-i', room), j: scratchInt32('pair-j', room), d2: scratchFloat64('pair-d2', room) };
   const limits = { size2: size * size, slack, min2: min * min };
   if (nx * ny * nz <= 8 * n + 1024) denseScan(coords, n, reach, size, low, [nx, ny, nz], limits, out);
   else sparseScan(coords, n, reach, size, limits, out);
@@ -48,35 +53,31 @@ interface Limits {
   readonly min2: number;
 }
 
-/** Appends a pair when `min² ≤ d2 ≤ (reach_i + reach_j + slack)²`. */
-function offer(out: PairList, i: number, j: number, d2: number, limit: number, limits: Limits): void {
-  if (d2 < limits.min2 || d2 > limit * limit) return;
-  if (out.count === out.i.length) {
-    const grown = 2 * out.count;
-    const i2 = new Int32Array(grown);
-    const j2 = new Int32Array(grown);
-    const d22 = new Float64Array(grown);
-    i2.set(out.i);
-    j2.set(out.j);
-    d22.set(out.d2);
-    out.i = i2;
-    out.j = j2;
-    out.d2 = d22;
-  }
-  out.i[out.count] = i;
-  out.j[out.count] = j;
-  out.d2[out.count++] = d2;
+/** Doubles the room of `out`, keeping its pairs. */
+function grow(out: PairList): void {
+  const room = 2 * out.count;
+  const i = out.i.slice();
+  const j = out.j.slice();
+  const d2 = out.d2.slice();
+  out.i = scratchInt32('pair-i', room);
+  out.j = scratchInt32('pair-j', room);
+  out.d2 = scratchFloat64('pair-d2', room);
+  out.i.set(i);
+  out.j.set(j);
+  out.d2.set(d2);
 }
 
-/** Points sorted by slot: `start[s]…start[s + 1]` index into `members`. */
+/**
+ * Points sorted by slot: `start[s]…start[s + 1]` index into `members` (ascending within a slot). Counts
+ * become bucket ends, then points are placed from the back, which leaves each entry at its bucket start.
+ */
 function countingSort(slotOf: Int32Array, slots: number): { start: Int32Array; members: Int32Array } {
   const n = slotOf.length;
-  const start = new Int32Array(slots + 1);
-  for (let i = 0; i < n; i++) start[slotOf[i]! + 1]!++;
-  for (let s = 0; s < slots; s++) start[s + 1]! += start[s]!;
-  const fill = start.slice(0, slots);
-  const members = new Int32Array(n);
-  for (let i = 0; i < n; i++) members[fill[slotOf[i]!]!++] = i;
+  const start = scratchInt32('grid-start', slots + 1).fill(0);
+  for (let i = 0; i < n; i++) start[slotOf[i]!]!++;
+  for (let s = 1; s <= slots; s++) start[s]! += start[s - 1]!;
+  const members = scratchInt32('grid-members', n);
+  for (let i = n - 1; i >= 0; i--) members[--start[slotOf[i]!]!] = i;
   return { start, members };
 }
 
@@ -107,7 +108,7 @@ function denseScan(
   limits: Limits,
   out: PairList,
 ): void {
-  const slotOf = new Int32Array(n);
+  const slotOf = scratchInt32('grid-slot', n);
   for (let i = 0; i < n; i++) {
     const x = Math.min(nx - 1, Math.floor((coords[3 * i]! - low[0]!) / size));
     const y = Math.min(ny - 1, Math.floor((coords[3 * i + 1]! - low[1]!) / size));
@@ -115,8 +116,8 @@ function denseScan(
     slotOf[i] = x + nx * (y + ny * z);
   }
   const { start, members } = countingSort(slotOf, nx * ny * nz);
-  const xyz = new Float64Array(3 * n);
-  const sortedReach = new Float64Array(n);
+  const xyz = scratchFloat64('grid-xyz', 3 * n);
+  const sortedReach = scratchFloat64('grid-reach', n);
   for (let k = 0; k < n; k++) {
     const i = members[k]!;
     xyz[3 * k] = coords[3 * i]!;
@@ -159,11 +160,14 @@ function scan(sorted: Sorted, k0: number, k1: number, m0: number, m1: number, sa
       const dz = xyz[3 * m + 2]! - z;
       const d2 = dx * dx + dy * dy + dz * dz;
       if (d2 >= size2) continue;
+      const limit = reach[k]! + reach[m]! + limits.slack;
+      if (d2 < limits.min2 || d2 > limit * limit) continue;
+      if (out.count === out.i.length) grow(out);
       const i = members[k]!;
       const j = members[m]!;
-      const limit = reach[k]! + reach[m]! + limits.slack;
-      if (i < j) offer(out, i, j, d2, limit, limits);
-      else offer(out, j, i, d2, limit, limits);
+      out.i[out.count] = i < j ? i : j;
+      out.j[out.count] = i < j ? j : i;
+      out.d2[out.count++] = d2;
     }
   }
 }
@@ -200,7 +204,12 @@ function sparseScan(coords: Float64Array, n: number, reach: Float64Array, size: 
             const j = members[k]!;
             if (j <= i) continue;
             const d2 = distance2(i, j);
-            if (d2 < limits.size2) offer(out, i, j, d2, reach[i]! + reach[j]! + limits.slack, limits);
+            const limit = reach[i]! + reach[j]! + limits.slack;
+            if (d2 >= limits.size2 || d2 < limits.min2 || d2 > limit * limit) continue;
+            if (out.count === out.i.length) grow(out);
+            out.i[out.count] = i;
+            out.j[out.count] = j;
+            out.d2[out.count++] = d2;
           }
         }
       }

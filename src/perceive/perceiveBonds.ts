@@ -7,6 +7,7 @@ import { elementInfo } from '../model/elements.js';
 import { ConformarkError, usageError } from '../model/errors.js';
 import type { Bond, Molecule } from '../model/molecule.js';
 import { nearPairs, type PairList } from './nearPairs.js';
+import { scratchInt32, scratchUint8 } from './scratch.js';
 
 /** Options of {@link perceiveBonds}. */
 export interface PerceiveBondsOptions {
@@ -49,23 +50,23 @@ export function perceiveBonds(mol: Molecule, options: PerceiveBondsOptions = {})
   const { radii, z } = atomRadii(mol);
   checkCoordinates(mol);
   const found = nearPairs(mol.coords, n, radii, tolerance, MIN_BOND_LENGTH_A);
-  const distance = new Float64Array(found.count);
-  for (let k = 0; k < found.count; k++) distance[k] = Math.sqrt(found.d2[k]!);
-  const kept = new Uint8Array(found.count).fill(1);
-  capHydrogens(n, z, found, distance, kept);
-  capCarbons(n, z, radii, found, distance, kept);
+  const kept = scratchUint8('bond-kept', found.count).fill(1);
+  capHydrogens(n, z, found, kept);
+  capCarbons(n, z, radii, found, kept);
   return sortedBonds(n, found, kept);
 }
 
-/** The kept pairs as bonds sorted by (a, b): counted into rows by `a`, each short row sorted by insertion. */
+/**
+ * The kept pairs as bonds sorted by (a, b): counted into rows by `a` (counts become row ends, then pairs are
+ * placed from the back, leaving each entry at its row start), each short row sorted by insertion.
+ */
 function sortedBonds(n: number, found: PairList, kept: Uint8Array): Bond[] {
   const { i: a, j: b } = found;
-  const start = new Int32Array(n + 1);
-  for (let k = 0; k < found.count; k++) if (kept[k]) start[a[k]! + 1]!++;
-  for (let v = 0; v < n; v++) start[v + 1]! += start[v]!;
-  const fill = start.slice(0, n);
-  const partner = new Int32Array(start[n]!);
-  for (let k = 0; k < found.count; k++) if (kept[k]) partner[fill[a[k]!]!++] = b[k]!;
+  const start = scratchInt32('bond-start', n + 1).fill(0);
+  for (let k = 0; k < found.count; k++) if (kept[k]) start[a[k]!]!++;
+  for (let v = 1; v <= n; v++) start[v]! += start[v - 1]!;
+  const partner = scratchInt32('bond-partner', start[n]!);
+  for (let k = found.count - 1; k >= 0; k--) if (kept[k]) partner[--start[a[k]!]!] = b[k]!;
   const bonds: Bond[] = [];
   for (let v = 0; v < n; v++) {
     const row0 = start[v]!;
@@ -82,9 +83,9 @@ function sortedBonds(n: number, found: PairList, kept: Uint8Array): Bond[] {
 }
 
 /** Each H keeps only its nearest candidate (ties to the lower partner index, so order does not matter). */
-function capHydrogens(n: number, z: Uint8Array, found: PairList, d: Float64Array, kept: Uint8Array): void {
-  const { i: a, j: b } = found;
-  const nearest = new Int32Array(n).fill(-1);
+function capHydrogens(n: number, z: Uint8Array, found: PairList, kept: Uint8Array): void {
+  const { i: a, j: b, d2: d } = found;
+  const nearest = scratchInt32('bond-atom', n).fill(-1);
   for (let k = 0; k < found.count; k++) {
     if (z[a[k]!] === 1) offerNearest(nearest, a, b, d, a[k]!, k, b[k]!);
     if (z[b[k]!] === 1) offerNearest(nearest, a, b, d, b[k]!, k, a[k]!);
@@ -94,19 +95,28 @@ function capHydrogens(n: number, z: Uint8Array, found: PairList, d: Float64Array
   }
 }
 
-/** Makes candidate k (from hydrogen h to `other`) the nearest of h when it is closer, or as close to a lower index. */
-function offerNearest(nearest: Int32Array, a: Int32Array, b: Int32Array, d: Float64Array, h: number, k: number, other: number): void {
+/**
+ * Makes candidate k (from hydrogen h to `other`) the nearest of h when it is closer, or as close to a lower
+ * index. Distances are compared after the square root (`d2` holds squares), as equal roots are a tie.
+ */
+function offerNearest(nearest: Int32Array, a: Int32Array, b: Int32Array, d2: Float64Array, h: number, k: number, other: number): void {
   const best = nearest[h]!;
-  if (best < 0 || d[k]! < d[best]! || (d[k] === d[best] && other < (a[best] === h ? b[best]! : a[best]!))) nearest[h] = k;
+  if (best < 0) {
+    nearest[h] = k;
+    return;
+  }
+  const dk = Math.sqrt(d2[k]!);
+  const dBest = Math.sqrt(d2[best]!);
+  if (dk < dBest || (dk === dBest && other < (a[best] === h ? b[best]! : a[best]!))) nearest[h] = k;
 }
 
 /**
  * Each carbon, in index order, keeps at most four bonds to non-metals: the smallest d / (r_a + r_b), ties to
  * the lower partner index.
  */
-function capCarbons(n: number, z: Uint8Array, radii: Float64Array, found: PairList, d: Float64Array, kept: Uint8Array): void {
-  const { i: a, j: b } = found;
-  const count = new Int32Array(n);
+function capCarbons(n: number, z: Uint8Array, radii: Float64Array, found: PairList, kept: Uint8Array): void {
+  const { i: a, j: b, d2 } = found;
+  const count = scratchInt32('bond-atom', n).fill(0);
   for (let k = 0; k < found.count; k++) {
     if (!kept[k]) continue;
     if (z[a[k]!] === 6 && NON_METAL[z[b[k]!]!]) count[a[k]!]!++;
@@ -121,7 +131,7 @@ function capCarbons(n: number, z: Uint8Array, radii: Float64Array, found: PairLi
   }
   for (const [atom, bonds] of incident) {
     const other = (k: number) => (a[k] === atom ? b[k]! : a[k]!);
-    const ratio = (k: number) => d[k]! / (radii[a[k]!]! + radii[b[k]!]!);
+    const ratio = (k: number) => Math.sqrt(d2[k]!) / (radii[a[k]!]! + radii[b[k]!]!);
     const live = bonds.filter((k) => kept[k] && NON_METAL[z[other(k)]!]);
     live.sort((p, q) => ratio(p) - ratio(q) || other(p) - other(q));
     for (const k of live.slice(4)) kept[k] = 0;
