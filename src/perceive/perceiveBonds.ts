@@ -67,7 +67,10 @@ function sortedBonds(n: number, found: PairList, kept: Uint8Array): Bond[] {
   for (let v = 1; v <= n; v++) start[v]! += start[v - 1]!;
   const partner = scratchInt32('bond-partner', start[n]!);
   for (let k = found.count - 1; k >= 0; k--) if (kept[k]) partner[--start[a[k]!]!] = b[k]!;
-  const bonds: Bond[] = [];
+  // one allocation of the final length: a growing array of this size would be copied through several
+  // large-object allocations, each on fresh pages
+  const bonds = new Array<Bond>(start[n]!);
+  let count = 0;
   for (let v = 0; v < n; v++) {
     const row0 = start[v]!;
     const row1 = start[v + 1]!;
@@ -77,7 +80,7 @@ function sortedBonds(n: number, found: PairList, kept: Uint8Array): Bond[] {
       for (; m >= row0 && partner[m]! > x; m--) partner[m + 1] = partner[m]!;
       partner[m + 1] = x;
     }
-    for (let k = row0; k < row1; k++) bonds.push({ a: v, b: partner[k]!, order: 1, perceived: true });
+    for (let k = row0; k < row1; k++) bonds[count++] = { a: v, b: partner[k]!, order: 1, perceived: true };
   }
   return bonds;
 }
