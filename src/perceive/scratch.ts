@@ -4,7 +4,7 @@
  * temporary index arrays, so the buffers are kept between calls and only grow. Callers get a view of the
  * requested length whose contents are unspecified: they must fill it before reading. A view must not
  * outlive the call that took it, nor escape into a result, and one name may be in use once at a time.
- * Memory held: the largest request seen for each name (about 100 bytes per atom of the largest molecule).
+ * Memory held: the largest request seen for each name (at most about 150 bytes per atom of the largest molecule seen).
  */
 
 const int32 = new Map<string, Int32Array>();
