@@ -34,24 +34,32 @@ for (let j = 0; j < 6; j++) {
   cyclohexane.push(['H', [cx + 1.03 * Math.cos(t), cy + 1.03 * Math.sin(t), cz - 0.35 * s]]);
 }
 
-/** Time of one call in ms. */
+// Collecting before every timed call keeps one run's garbage from being charged to the next (run.js passes
+// --expose-gc; without it the numbers are noisier).
+const collect = globalThis.gc ?? (() => {});
+if (!globalThis.gc) console.log('perceive: run with node --expose-gc for fair timings');
+
+/** Time of one call in ms, after a full collection. */
 function time(f) {
+  collect();
   const t0 = process.hrtime.bigint();
   f();
   return Number(process.hrtime.bigint() - t0) / 1e6;
 }
 
+const RUNS = 9;
+
 /**
- * Fastest of several interleaved runs on each input after warming up the compiler: on a shared machine the
- * minimum is the least disturbed estimate of the work itself.
+ * Fastest of several interleaved runs on each input after warming up the compiler on both: on a shared
+ * machine the minimum is the least disturbed estimate of the work itself.
  */
 function measure(label, run, small, large) {
   for (let r = 0; r < 5; r++) run(small);
-  run(large);
+  for (let r = 0; r < 2; r++) run(large);
   let bestSmall = Infinity;
   let bestLarge = Infinity;
-  for (let r = 0; r < 7; r++) {
-    bestSmall = Math.min(bestSmall, time(() => run(small)), time(() => run(small)));
+  for (let r = 0; r < RUNS; r++) {
+    bestSmall = Math.min(bestSmall, time(() => run(small)));
     bestLarge = Math.min(bestLarge, time(() => run(large)));
   }
   report(label, bestSmall, bestLarge);

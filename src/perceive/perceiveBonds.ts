@@ -6,7 +6,8 @@
 import { elementInfo } from '../model/elements.js';
 import { ConformarkError, usageError } from '../model/errors.js';
 import type { Bond, Molecule } from '../model/molecule.js';
-import { spatialGrid } from './spatialGrid.js';
+import { nearPairs, type PairList } from './nearPairs.js';
+import { scratchInt32, scratchUint8 } from './scratch.js';
 
 /** Options of {@link perceiveBonds}. */
 export interface PerceiveBondsOptions {
@@ -23,7 +24,8 @@ export const BOND_TOLERANCE_A = 0.4;
 export const MIN_BOND_LENGTH_A = 0.4;
 
 /** Non-metals: the carbon valence cap counts only bonds to these. */
-const NON_METALS = new Set([1, 2, 5, 6, 7, 8, 9, 10, 14, 15, 16, 17, 18, 33, 34, 35, 36, 52, 53, 54, 85, 86]);
+const NON_METAL = new Uint8Array(256);
+for (const z of [1, 2, 5, 6, 7, 8, 9, 10, 14, 15, 16, 17, 18, 33, 34, 35, 36, 52, 53, 54, 85, 86]) NON_METAL[z] = 1;
 
 /**
  * Perceives single bonds from the coordinates of `mol` (any bonds in the file are ignored).
@@ -47,88 +49,93 @@ export function perceiveBonds(mol: Molecule, options: PerceiveBondsOptions = {})
   const n = mol.atoms.length;
   const { radii, z } = atomRadii(mol);
   checkCoordinates(mol);
-  const maxRadius = radii.reduce((m, r) => Math.max(m, r), 0);
-
-  const found = new Candidates();
-  const min2 = MIN_BOND_LENGTH_A * MIN_BOND_LENGTH_A;
-  spatialGrid(mol.coords, n, 2 * maxRadius + tolerance).forEachNearPair((i, j, d2) => {
-    const limit = radii[i]! + radii[j]! + tolerance;
-    if (d2 >= min2 && d2 <= limit * limit) found.push(i, j, Math.sqrt(d2));
-  });
-  const kept = new Uint8Array(found.length).fill(1);
+  const found = nearPairs(mol.coords, n, radii, tolerance, MIN_BOND_LENGTH_A);
+  const kept = scratchUint8('bond-kept', found.count).fill(1);
   capHydrogens(n, z, found, kept);
   capCarbons(n, z, radii, found, kept);
-
-  // sort by (a, b) through one numeric key per bond (exact: n² < 2^53 for any real file)
-  const keys = new Float64Array(kept.reduce((m, k) => m + k, 0));
-  let count = 0;
-  for (let k = 0; k < found.length; k++) if (kept[k]) keys[count++] = found.a[k]! * n + found.b[k]!;
-  keys.sort();
-  return Array.from(keys, (key) => {
-    const a = Math.floor(key / n);
-    return { a, b: key - a * n, order: 1, perceived: true };
-  });
+  return sortedBonds(n, found, kept);
 }
 
-/** Candidate bonds in growable typed arrays: atoms `a[k] < b[k]` at distance `d[k]` (Å). */
-class Candidates {
-  a = new Int32Array(1024);
-  b = new Int32Array(1024);
-  d = new Float64Array(1024);
-  length = 0;
-  push(i: number, j: number, distance: number): void {
-    if (this.length === this.a.length) {
-      const grow = <T extends Int32Array | Float64Array>(old: T, fresh: T): T => (fresh.set(old), fresh);
-      this.a = grow(this.a, new Int32Array(2 * this.length));
-      this.b = grow(this.b, new Int32Array(2 * this.length));
-      this.d = grow(this.d, new Float64Array(2 * this.length));
+/**
+ * The kept pairs as bonds sorted by (a, b): counted into rows by `a` (counts become row ends, then pairs are
+ * placed from the back, leaving each entry at its row start), each short row sorted by insertion.
+ */
+function sortedBonds(n: number, found: PairList, kept: Uint8Array): Bond[] {
+  const { i: a, j: b } = found;
+  const start = scratchInt32('bond-start', n + 1).fill(0);
+  for (let k = 0; k < found.count; k++) if (kept[k]) start[a[k]!]!++;
+  for (let v = 1; v <= n; v++) start[v]! += start[v - 1]!;
+  const partner = scratchInt32('bond-partner', start[n]!);
+  for (let k = found.count - 1; k >= 0; k--) if (kept[k]) partner[--start[a[k]!]!] = b[k]!;
+  // one allocation of the final length: a growing array of this size would be copied through several
+  // large-object allocations, each on fresh pages
+  const bonds = new Array<Bond>(start[n]!);
+  let count = 0;
+  for (let v = 0; v < n; v++) {
+    const row0 = start[v]!;
+    const row1 = start[v + 1]!;
+    for (let k = row0 + 1; k < row1; k++) {
+      const x = partner[k]!;
+      let m = k - 1;
+      for (; m >= row0 && partner[m]! > x; m--) partner[m + 1] = partner[m]!;
+      partner[m + 1] = x;
     }
-    this.a[this.length] = i;
-    this.b[this.length] = j;
-    this.d[this.length++] = distance;
+    for (let k = row0; k < row1; k++) bonds[count++] = { a: v, b: partner[k]!, order: 1, perceived: true };
   }
+  return bonds;
 }
 
 /** Each H keeps only its nearest candidate (ties to the lower partner index, so order does not matter). */
-function capHydrogens(n: number, z: Uint8Array, found: Candidates, kept: Uint8Array): void {
-  const { a, b, d } = found;
-  const nearest = new Int32Array(n).fill(-1);
-  const offer = (h: number, k: number, other: number) => {
-    const best = nearest[h]!;
-    if (best < 0 || d[k]! < d[best]! || (d[k] === d[best] && other < (a[best] === h ? b[best]! : a[best]!))) nearest[h] = k;
-  };
-  for (let k = 0; k < found.length; k++) {
-    if (z[a[k]!] === 1) offer(a[k]!, k, b[k]!);
-    if (z[b[k]!] === 1) offer(b[k]!, k, a[k]!);
+function capHydrogens(n: number, z: Uint8Array, found: PairList, kept: Uint8Array): void {
+  const { i: a, j: b, d2: d } = found;
+  const nearest = scratchInt32('bond-atom', n).fill(-1);
+  for (let k = 0; k < found.count; k++) {
+    if (z[a[k]!] === 1) offerNearest(nearest, a, b, d, a[k]!, k, b[k]!);
+    if (z[b[k]!] === 1) offerNearest(nearest, a, b, d, b[k]!, k, a[k]!);
   }
-  for (let k = 0; k < found.length; k++) {
+  for (let k = 0; k < found.count; k++) {
     if ((z[a[k]!] === 1 && nearest[a[k]!] !== k) || (z[b[k]!] === 1 && nearest[b[k]!] !== k)) kept[k] = 0;
   }
+}
+
+/**
+ * Makes candidate k (from hydrogen h to `other`) the nearest of h when it is closer, or as close to a lower
+ * index. Distances are compared after the square root (`d2` holds squares), as equal roots are a tie.
+ */
+function offerNearest(nearest: Int32Array, a: Int32Array, b: Int32Array, d2: Float64Array, h: number, k: number, other: number): void {
+  const best = nearest[h]!;
+  if (best < 0) {
+    nearest[h] = k;
+    return;
+  }
+  const dk = Math.sqrt(d2[k]!);
+  const dBest = Math.sqrt(d2[best]!);
+  if (dk < dBest || (dk === dBest && other < (a[best] === h ? b[best]! : a[best]!))) nearest[h] = k;
 }
 
 /**
  * Each carbon, in index order, keeps at most four bonds to non-metals: the smallest d / (r_a + r_b), ties to
  * the lower partner index.
  */
-function capCarbons(n: number, z: Uint8Array, radii: Float64Array, found: Candidates, kept: Uint8Array): void {
-  const { a, b, d } = found;
-  const count = new Int32Array(n);
-  for (let k = 0; k < found.length; k++) {
+function capCarbons(n: number, z: Uint8Array, radii: Float64Array, found: PairList, kept: Uint8Array): void {
+  const { i: a, j: b, d2 } = found;
+  const count = scratchInt32('bond-atom', n).fill(0);
+  for (let k = 0; k < found.count; k++) {
     if (!kept[k]) continue;
-    if (z[a[k]!] === 6 && NON_METALS.has(z[b[k]!]!)) count[a[k]!]!++;
-    if (z[b[k]!] === 6 && NON_METALS.has(z[a[k]!]!)) count[b[k]!]!++;
+    if (z[a[k]!] === 6 && NON_METAL[z[b[k]!]!]) count[a[k]!]!++;
+    if (z[b[k]!] === 6 && NON_METAL[z[a[k]!]!]) count[b[k]!]!++;
   }
   const incident = new Map<number, number[]>();
   for (let atom = 0; atom < n; atom++) if (count[atom]! > 4) incident.set(atom, []);
   if (incident.size === 0) return;
-  for (let k = 0; k < found.length; k++) {
+  for (let k = 0; k < found.count; k++) {
     incident.get(a[k]!)?.push(k);
     incident.get(b[k]!)?.push(k);
   }
   for (const [atom, bonds] of incident) {
     const other = (k: number) => (a[k] === atom ? b[k]! : a[k]!);
-    const ratio = (k: number) => d[k]! / (radii[a[k]!]! + radii[b[k]!]!);
-    const live = bonds.filter((k) => kept[k] && NON_METALS.has(z[other(k)]!));
+    const ratio = (k: number) => Math.sqrt(d2[k]!) / (radii[a[k]!]! + radii[b[k]!]!);
+    const live = bonds.filter((k) => kept[k] && NON_METAL[z[other(k)]!]);
     live.sort((p, q) => ratio(p) - ratio(q) || other(p) - other(q));
     for (const k of live.slice(4)) kept[k] = 0;
   }

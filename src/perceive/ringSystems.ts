@@ -2,7 +2,7 @@
  * Ring systems of a molecular graph: its biconnected blocks that contain a cycle. Fused and bridged rings
  * form one system; spiro rings (sharing one atom) and rings joined by a chain are separate systems.
  */
-import type { Graph } from './graph.js';
+import { adjacencyOf, type Adjacency, type Graph } from './graph.js';
 
 /** One ring system: its atoms (ascending, 0-based) and bonds (`[a, b]` with `a < b`, sorted). */
 export interface RingSystem {
@@ -18,73 +18,86 @@ export interface RingSystem {
  * @example ringSystems(buildGraph(3, triangleBonds)).length // 1
  */
 export function ringSystems(graph: Graph): RingSystem[] {
-  const csr = compact(graph);
-  const alive = pruneTrees(csr);
-  const blocks = biconnectedBlocks(csr, alive);
+  const blocks = ringBlocks(graph);
   const stamp = new Int32Array(graph.size).fill(-1);
-  const systems: RingSystem[] = blocks.map((edges, id) => {
-    const atoms: number[] = [];
-    for (const edge of edges) {
-      if (edge[0] > edge[1]) edge.reverse();
-      for (const atom of edge) {
-        if (stamp[atom] !== id) {
-          stamp[atom] = id;
-          atoms.push(atom);
-        }
-      }
-    }
-    atoms.sort((x, y) => x - y);
-    edges.sort((p, q) => p[0] - q[0] || p[1] - q[1]);
-    return { atoms, bonds: edges };
-  });
+  const systems: RingSystem[] = [];
+  for (let id = 0; id < blocks.count; id++) systems.push(systemOf(blocks, id, stamp));
   return systems.sort((p, q) => p.atoms[0]! - q.atoms[0]!);
 }
 
-/** Neighbour lists packed into two typed arrays: neighbours of v are `list[start[v]…start[v + 1]]`. */
-interface Packed {
-  readonly size: number;
-  readonly start: Int32Array;
-  readonly list: Int32Array;
+/**
+ * Bonds of the blocks that contain a cycle, flat: block `id` holds bonds `k` from `first[id]` to
+ * `first[id + 1]`, each bond `atomA[k]`–`atomB[k]` (either order). Blocks come in no particular order.
+ */
+export interface RingBlocks {
+  readonly count: number;
+  readonly first: Int32Array;
+  readonly atomA: Int32Array;
+  readonly atomB: Int32Array;
 }
 
-function compact(graph: Graph): Packed {
-  const n = graph.size;
-  const start = new Int32Array(n + 1);
-  for (let v = 0; v < n; v++) start[v + 1] = start[v]! + graph.neighbors[v]!.length;
-  const list = new Int32Array(start[n]!);
-  for (let v = 0; v < n; v++) list.set(graph.neighbors[v]!, start[v]!);
-  return { size: n, start, list };
+/** The blocks of {@link ringSystems} as flat typed arrays (tree atoms pruned first). Linear. */
+export function ringBlocks(graph: Graph): RingBlocks {
+  const adjacency = adjacencyOf(graph);
+  return biconnectedBlocks(adjacency, pruneTrees(adjacency));
+}
+
+/** Block `id` as a ring system: atoms ascending, bonds `[a, b]` with `a < b` sorted. `stamp` is scratch. */
+export function systemOf(blocks: RingBlocks, id: number, stamp: Int32Array): RingSystem {
+  const atoms: number[] = [];
+  const bonds: [number, number][] = [];
+  for (let k = blocks.first[id]!; k < blocks.first[id + 1]!; k++) {
+    const a = blocks.atomA[k]!;
+    const b = blocks.atomB[k]!;
+    bonds.push(a < b ? [a, b] : [b, a]);
+    if (stamp[a] !== id) {
+      stamp[a] = id;
+      atoms.push(a);
+    }
+    if (stamp[b] !== id) {
+      stamp[b] = id;
+      atoms.push(b);
+    }
+  }
+  atoms.sort((x, y) => x - y);
+  bonds.sort((p, q) => p[0] - q[0] || p[1] - q[1]);
+  return { atoms, bonds };
 }
 
 /** Marks atoms that survive repeated removal of atoms with at most one remaining neighbour. */
-function pruneTrees(graph: Packed): Uint8Array {
+function pruneTrees(graph: Adjacency): Uint8Array {
   const { size: n, start, list } = graph;
   const degree = new Int32Array(n);
   const alive = new Uint8Array(n).fill(1);
-  const queue: number[] = [];
+  // each atom enters the queue at most once: at degree ≤ 1, or when its degree drops to 1
+  const queue = new Int32Array(n);
+  let tail = 0;
   for (let v = 0; v < n; v++) {
     degree[v] = start[v + 1]! - start[v]!;
-    if (degree[v]! <= 1) queue.push(v);
+    if (degree[v]! <= 1) queue[tail++] = v;
   }
-  for (let head = 0; head < queue.length; head++) {
+  for (let head = 0; head < tail; head++) {
     const v = queue[head]!;
-    if (!alive[v]) continue;
     alive[v] = 0;
     for (let k = start[v]!; k < start[v + 1]!; k++) {
       const w = list[k]!;
-      if (alive[w] && --degree[w]! === 1) queue.push(w);
+      if (alive[w] && --degree[w]! === 1) queue[tail++] = w;
     }
   }
   return alive;
 }
 
-/** Bond lists of the biconnected blocks (bridges left out) of the subgraph induced by `alive` atoms. */
-function biconnectedBlocks(graph: Packed, alive: Uint8Array): [number, number][][] {
+/** The biconnected blocks (bridges left out) of the subgraph induced by `alive` atoms. */
+function biconnectedBlocks(graph: Adjacency, alive: Uint8Array): RingBlocks {
   const { size: n, start, list } = graph;
   const disc = new Int32Array(n).fill(-1);
   const low = new Int32Array(n);
-  const blocks: [number, number][][] = [];
   const bondCount = list.length;
+  // blocks are copied out of the walk's stack into these (each bond lands in at most one block)
+  const atomA = new Int32Array(bondCount / 2 + 1);
+  const atomB = new Int32Array(bondCount / 2 + 1);
+  const first: number[] = [0];
+  let stored = 0;
   // bonds of the current walk, as two parallel stacks of atoms (each bond is pushed at most once)
   const stackA = new Int32Array(bondCount / 2 + 1);
   const stackB = new Int32Array(bondCount / 2 + 1);
@@ -130,13 +143,15 @@ function biconnectedBlocks(graph: Packed, alive: Uint8Array): [number, number][]
         let bottom = bonds - 1;
         while (stackA[bottom] !== p || stackB[bottom] !== v) bottom--;
         if (bottom < bonds - 1) {
-          const block: [number, number][] = [];
-          for (let k = bottom; k < bonds; k++) block.push([stackA[k]!, stackB[k]!]);
-          blocks.push(block);
+          for (let k = bottom; k < bonds; k++) {
+            atomA[stored] = stackA[k]!;
+            atomB[stored++] = stackB[k]!;
+          }
+          first.push(stored);
         }
         bonds = bottom;
       }
     }
   }
-  return blocks;
+  return { count: first.length - 1, first: Int32Array.from(first), atomA, atomB };
 }
