@@ -11,12 +11,13 @@ import { parseXyzComment } from './xyzComment.js';
 const PROPERTIES: PropertyDescriptor = { enumerable: true, configurable: true };
 
 export class XyzRecord implements Molecule {
-  readonly title: string;
-  readonly atoms: readonly Atom[];
-  readonly coords: Float64Array;
-  readonly bonds: null;
+  declare readonly title: string;
+  declare readonly atoms: readonly Atom[];
+  declare readonly coords: Float64Array;
+  declare readonly bonds: null;
   declare readonly properties: Readonly<Record<string, string>>;
-  readonly source: RecordSource;
+  declare readonly source: RecordSource;
+  // `declare`: no field initialisers, so the constructor sets the keys in `Molecule` order
   #properties: Readonly<Record<string, string>> | null = null;
 
   static {
