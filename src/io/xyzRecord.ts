@@ -11,13 +11,13 @@ import { parseXyzComment } from './xyzComment.js';
 const PROPERTIES: PropertyDescriptor = { enumerable: true, configurable: true };
 
 export class XyzRecord implements Molecule {
+  // `declare`: no field initialisers, so the constructor sets the keys in `Molecule` order (as `{ ...mol }` shows)
   declare readonly title: string;
   declare readonly atoms: readonly Atom[];
   declare readonly coords: Float64Array;
   declare readonly bonds: null;
   declare readonly properties: Readonly<Record<string, string>>;
   declare readonly source: RecordSource;
-  // `declare`: no field initialisers, so the constructor sets the keys in `Molecule` order
   #properties: Readonly<Record<string, string>> | null = null;
 
   static {
