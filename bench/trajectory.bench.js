@@ -1,7 +1,11 @@
 // Trajectory puckering throughput and memory: `analyzeTrajectory` on a generated ~1,000,000-frame cyclohexane
 // XYZ trajectory (18 atoms per frame) against a bare line scan of the same file in the same run (read 1 MiB
-// chunks, decode, split into lines, parse nothing). Goal: within 2x of the scan. Then peak RSS of a child
-// process analysing a 100,000-frame and the 1,000,000-frame file (goal: flat, under 150 MB).
+// chunks, decode, split into lines, parse nothing), best of TRAJ_ROUNDS (default 3) interleaved rounds.
+// Goal: within 2x of the scan. Then peak RSS of a child process analysing a 100,000-frame and the
+// 1,000,000-frame file, with default node flags (goal: flat, under 150 MB).
+// Last run (2 shared cores, best of 3): trajectory / scan 0.93x (readFrames 0.72x), peak RSS 122 / 127 MB
+// (100k / 1M frames; 86 MB of it is loading the library). This bench on the code before the in-place XYZ
+// reader, bounded batches and byte-written CSV: 2.56x (readFrames 1.74x), 179 / 185 MB.
 import { createReadStream, existsSync, mkdirSync, openSync, writeSync, closeSync, renameSync, statSync } from 'node:fs';
 import { spawnSync } from 'node:child_process';
 import { dirname, join } from 'node:path';
@@ -89,34 +93,63 @@ const smallPath = file(small);
 const { analyzeTrajectory, readFrames } = await import('../dist/index.js');
 console.log(`file: ${bigPath} (${(statSync(bigPath).size / 1e6).toFixed(0)} MB, ${big} frames)`);
 
-let t = performance.now();
-const lines = await scan(bigPath);
-const scanS = (performance.now() - t) / 1000;
-if (lines !== big * 20) throw new Error(`scan counted ${lines} lines, expected ${big * 20}`);
-t = performance.now();
-let frames = 0;
-for await (const f of readFrames(bigPath, { reuse: true })) frames += f.coords.length > 0 ? 1 : 0;
-const readS = (performance.now() - t) / 1000;
-if (frames !== big) throw new Error(`readFrames gave ${frames} frames, expected ${big}`);
-t = performance.now();
-const summary = await analyzeTrajectory(bigPath, { dir: join(out, 'trajectory'), ring: '1' });
-const trajS = (performance.now() - t) / 1000;
-if (summary.frames.analysed !== big) throw new Error(`analysed ${summary.frames.analysed} frames, expected ${big}`);
+/** Seconds taken by `run`. */
+async function timed(run) {
+  const t = performance.now();
+  await run();
+  return (performance.now() - t) / 1000;
+}
+
+// Best of `rounds` interleaved runs (the machine is shared: the best run is the least disturbed one); the
+// order rotates each round so no contender always runs right after another's garbage.
+const rounds = Number(process.env.TRAJ_ROUNDS ?? 3);
+let summary;
+const contenders = {
+  scan: async () => {
+    const lines = await scan(bigPath);
+    if (lines !== big * 20) throw new Error(`scan counted ${lines} lines, expected ${big * 20}`);
+  },
+  read: async () => {
+    let frames = 0;
+    for await (const f of readFrames(bigPath, { reuse: true })) frames += f.coords.length > 0 ? 1 : 0;
+    if (frames !== big) throw new Error(`readFrames gave ${frames} frames, expected ${big}`);
+  },
+  traj: async () => {
+    summary = await analyzeTrajectory(bigPath, { dir: join(out, 'trajectory'), ring: '1' });
+    if (summary.frames.analysed !== big) throw new Error(`analysed ${summary.frames.analysed} frames, expected ${big}`);
+  },
+};
+const best = { scan: Infinity, read: Infinity, traj: Infinity };
+const names = Object.keys(contenders);
+for (let r = 0; r < rounds; r++) {
+  for (let i = 0; i < names.length; i++) {
+    const name = names[(i + r) % names.length];
+    best[name] = Math.min(best[name], await timed(contenders[name]));
+  }
+}
+const { scan: scanS, read: readS, traj: trajS } = best;
+console.log(`best of ${rounds} interleaved rounds`);
 console.log(`line scan (read + split)        ${scanS.toFixed(2).padStart(7)} s  ${(big / scanS).toFixed(0).padStart(9)} frames/s`);
-console.log(`readFrames alone (reuse)         ${readS.toFixed(2).padStart(7)} s  ${(big / readS).toFixed(0).padStart(9)} frames/s`);
+console.log(`readFrames alone (reuse)        ${readS.toFixed(2).padStart(7)} s  ${(big / readS).toFixed(0).padStart(9)} frames/s`);
 console.log(`analyzeTrajectory (csv+figures) ${trajS.toFixed(2).padStart(7)} s  ${(big / trajS).toFixed(0).padStart(9)} frames/s`);
 console.log(`ratio trajectory / scan time: ${(trajS / scanS).toFixed(2)}x (goal: at most 2x); readFrames / scan: ${(readS / scanS).toFixed(2)}x; analysis over reading: ${(trajS / readS).toFixed(2)}x`);
 console.log(`occupancy: ${Object.entries(summary.occupancy).map(([s, f]) => `${s} ${(100 * f).toFixed(1)}%`).join(', ')}`);
 
-// Peak memory in a fresh process per file size.
+// Peak memory in a fresh process per file size, next to the floor: a process that only loads the library.
 const child = (path) => {
-  const code = `import { analyzeTrajectory } from ${JSON.stringify(new URL('../dist/index.js', import.meta.url).href)};
+  const lib = JSON.stringify(new URL('../dist/index.js', import.meta.url).href);
+  const code = path === null
+    ? `await import(${lib}); console.log(process.resourceUsage().maxRSS);`
+    : `import { analyzeTrajectory } from ${lib};
 await analyzeTrajectory(${JSON.stringify(path)}, { dir: ${JSON.stringify(join(out, 'trajectory-rss'))} });
 console.log(process.resourceUsage().maxRSS);`;
   const r = spawnSync(process.execPath, ['--input-type=module', '-e', code], { encoding: 'utf8' });
   if (r.status !== 0) throw new Error(r.stderr);
   return Number(r.stdout.trim()) / 1024;
 };
-if (process.env.TRAJ_SKIP_RSS !== '1') for (const [frames, path] of [[small, smallPath], [big, bigPath]]) {
-  console.log(`peak RSS, ${String(frames).padStart(8)} frames (${(statSync(path).size / 1e6).toFixed(0).padStart(4)} MB file): ${child(path).toFixed(0)} MB (goal: under 150 MB, flat)`);
+if (process.env.TRAJ_SKIP_RSS !== '1') {
+  console.log(`peak RSS, library loaded, nothing read:          ${child(null).toFixed(0)} MB`);
+  for (const [frames, path] of [[small, smallPath], [big, bigPath]]) {
+    console.log(`peak RSS, ${String(frames).padStart(8)} frames (${(statSync(path).size / 1e6).toFixed(0).padStart(4)} MB file): ${child(path).toFixed(0)} MB (goal: under 150 MB, flat)`);
+  }
 }

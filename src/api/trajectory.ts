@@ -19,6 +19,7 @@ import type { FigureFormat } from './writeFigure.js';
 import type { Theme } from '../render/theme.js';
 import { readRecord } from './prepare.js';
 import { TextStream } from './csvStream.js';
+import { TrajectoryRows } from './trajectoryRows.js';
 import { parseTimestep, type Timestep } from './timestep.js';
 import { trajectorySetup } from './trajectorySetup.js';
 import { TrajectoryPlots } from './trajectoryPlots.js';
@@ -78,8 +79,6 @@ export interface TrajectorySummary {
   readonly files: readonly string[];
 }
 
-const num = (x: number, f: number) => String(Math.round(x * f) / f);
-
 function frameIssue(path: string, frame: Frame, code: string, message: string): ConformarkError {
   return new ConformarkError({ code, file: path, line: frame.line, message: `frame ${frame.index} ${message}` });
 }
@@ -114,6 +113,7 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
   const timeColumn = timestep ? [`time_${timestep.unit}`] : [];
   const fiveColumns = n === 5 ? ['P', 'tauM'] : [];
   csv.write(`${['frame', ...timeColumn, 'Q', 'thetaDeg', 'phiDeg', ...fiveColumns, 'shape', 'descriptor', ...setup.torsionColumns].join(',')}\n`);
+  const rows = new TrajectoryRows(csv);
   const stats = new TrajectoryStats({ stride, timestep: timestep?.value });
   const formStats = new TrajectoryStats({ stride, timestep: timestep?.value });
   const plots = new TrajectoryPlots(n, options.maxAmplitudeDeg ?? 60);
@@ -159,16 +159,35 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
       if (planar) planarFrames++;
       const shape = table.shapeOf(form);
       const phi = !planar && n > 4 && v.q2 >= PHASE_THRESHOLD ? v.phaseDeg : NaN;
-      let row = String(idx);
-      if (timestep) row += `,${num((idx - 1) * timestep.value, 1e6)}`;
-      row += `,${num(v.Q, 1e4)},${planar || n !== 6 ? '' : num(v.thetaDeg, 100)},${Number.isNaN(phi) ? '' : num(phi, 100)}`;
-      if (n === 5) row += planar || Number.isNaN(v.pDeg) ? ',,' : `,${num(v.pDeg, 100)},${num(v.tauMDeg, 100)}`;
-      row += `,${shape},${form >= 0 ? csvDescriptor[form] : ''}`;
-      for (const [a, b, cc, d] of torsions) {
-        const t = torsionAt(c, a, b, cc, d);
-        row += Number.isNaN(t) ? ',' : `,${num(t, 100)}`;
+      // the CSV row, written as bytes (no string per number: see TrajectoryRows)
+      rows.number(idx, 0);
+      if (timestep) {
+        rows.comma();
+        rows.number((idx - 1) * timestep.value, 6);
       }
-      csv.write(`${row}\n`);
+      rows.comma();
+      rows.number(v.Q, 4);
+      rows.comma();
+      if (!planar && n === 6) rows.number(v.thetaDeg, 2);
+      rows.comma();
+      if (!Number.isNaN(phi)) rows.number(phi, 2);
+      if (n === 5) {
+        rows.comma();
+        if (!planar && !Number.isNaN(v.pDeg)) rows.number(v.pDeg, 2);
+        rows.comma();
+        if (!planar && !Number.isNaN(v.pDeg)) rows.number(v.tauMDeg, 2);
+      }
+      rows.comma();
+      rows.text(shape);
+      rows.comma();
+      if (form >= 0) rows.text(csvDescriptor[form]!);
+      for (let k = 0; k < torsions.length; k++) {
+        const [a, b, cc, d] = torsions[k]!;
+        const t = torsionAt(c, a, b, cc, d);
+        rows.comma();
+        if (!Number.isNaN(t)) rows.number(t, 2);
+      }
+      rows.newline();
       stats.add(shape);
       formStats.add(table.descriptorOf(form) ?? shape);
       plots.add(idx, v, phi, planar, form >= 0 ? formCat[form]! : planar ? planarCat : puckeredCat);
@@ -180,6 +199,7 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
       const range = Number.isFinite(to) ? `from frame ${from} to ${to}` : `from frame ${from}`;
       throw usageError('no-frames', `no frames to analyse ${range}: the file has ${read} frame${read === 1 ? '' : 's'}`, path);
     }
+    rows.flush();
     csv.commit();
   } catch (err) {
     csv.abort();

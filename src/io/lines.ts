@@ -30,16 +30,24 @@ export function lineStrings(blocks: readonly LineBlock[]): string[] {
 }
 
 /**
- * Feeds the lines of a block to a consumer, in place when it scans ranges (`feedRange`), until `stopped()`.
+ * Feeds the lines of a block to a consumer, in place when it scans ranges (`feedRange`), from line `from`
+ * until `stopped()`; returns the index of the first line not fed (`block.count` when all were).
  */
-export function feedBlock(consumer: LineConsumer, block: LineBlock, stopped: () => boolean): void {
+export function feedBlock(consumer: LineConsumer, block: LineBlock, stopped: () => boolean, from = 0): number {
   const { text, count, starts, ends, first } = block;
+  let k = from;
   if (consumer.feedRange) {
-    for (let k = 0; k < count && !stopped(); k++) consumer.feedRange(text, starts[k]!, ends[k]!, first + k);
+    for (; k < count && !stopped(); k++) consumer.feedRange(text, starts[k]!, ends[k]!, first + k);
   } else {
-    for (let k = 0; k < count && !stopped(); k++) consumer.feed(text.slice(starts[k], ends[k]), first + k);
+    for (; k < count && !stopped(); k++) consumer.feed(text.slice(starts[k], ends[k]), first + k);
   }
+  return k;
 }
+
+/** Line-range arrays shorter than this are not worth recycling. */
+const RECYCLE_MIN = 256;
+/** Spare line-range arrays kept by a splitter. */
+const RECYCLE_MAX = 4;
 
 /**
  * Pushes text or bytes in, returns the complete lines (without line breaks); `end()` returns the last one.
@@ -52,6 +60,8 @@ export class LineSplitter {
   private started = false;
   private rest = '';
   private lineNo = 0;
+  /** Line-range arrays handed back with `recycle`, reused by the next pushes. */
+  private readonly spare: { starts: Int32Array; ends: Int32Array }[] = [];
 
   constructor(
     private readonly file: string,
@@ -125,6 +135,16 @@ export class LineSplitter {
     return blocks;
   }
 
+  /**
+   * Hands back blocks the caller is done with: their range arrays are reused by later pushes (the blocks
+   * must not be read afterwards). Optional; without it every push allocates its own arrays.
+   */
+  recycle(blocks: readonly LineBlock[]): void {
+    for (const { starts, ends } of blocks) {
+      if (starts.length >= RECYCLE_MIN && this.spare.length < RECYCLE_MAX) this.spare.push({ starts, ends });
+    }
+  }
+
   /** `end` as blocks (none, or one with the last line). */
   endBlocks(): LineBlock[] {
     if (this.carry) throw this.notText(); // the input ends inside a UTF-8 sequence
@@ -142,8 +162,10 @@ export class LineSplitter {
   private ranges(text: string, from: number, last: number): LineBlock {
     const first = this.lineNo + 1;
     const max = this.maxLineLength;
-    let starts: Int32Array = new Int32Array(((last - from) >> 5) + 16);
-    let ends: Int32Array = new Int32Array(starts.length);
+    const want = ((last - from) >> 5) + 16;
+    const spare = this.spare.length > 0 && this.spare[this.spare.length - 1]!.starts.length >= want ? this.spare.pop() : undefined;
+    let starts: Int32Array = spare?.starts ?? new Int32Array(want);
+    let ends: Int32Array = spare?.ends ?? new Int32Array(starts.length);
     let count = 0;
     for (let pos = from; pos <= last; ) {
       const nl = text.indexOf('\n', pos);

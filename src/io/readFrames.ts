@@ -3,6 +3,7 @@
  * `Molecule`. With `reuse`, XYZ frames recycle the coordinate buffers of frames already consumed: each
  * yielded `coords` is valid only until the next frame is requested (copy it to keep it).
  */
+import type { Molecule } from '../model/molecule.js';
 import { settledBatches, type StreamOptions } from './readRecords.js';
 
 /** One frame. */
@@ -15,6 +16,36 @@ export interface Frame {
   readonly coords: Float64Array;
   readonly title: string;
   readonly properties: Readonly<Record<string, string>>;
+}
+
+const PROPERTIES: PropertyDescriptor = { enumerable: true, configurable: true };
+
+/**
+ * A frame over its record. `properties` is an own enumerable accessor with one shared getter (a getter in
+ * an object literal costs a closure and a hidden class per frame), reading the record's lazily parsed ones.
+ */
+class FrameView implements Frame {
+  readonly index: number;
+  readonly line: number;
+  readonly coords: Float64Array;
+  readonly title: string;
+  declare readonly properties: Readonly<Record<string, string>>;
+  readonly #molecule: Molecule;
+
+  static {
+    PROPERTIES.get = function (this: FrameView) {
+      return this.#molecule.properties;
+    };
+  }
+
+  constructor(m: Molecule) {
+    this.index = m.source.index;
+    this.line = m.source.line;
+    this.coords = m.coords;
+    this.title = m.title;
+    Object.defineProperty(this, 'properties', PROPERTIES);
+    this.#molecule = m;
+  }
 }
 
 /** Options of `readFrames`. */
@@ -34,15 +65,7 @@ export async function* readFrames(path: string, options: FrameOptions = {}): Asy
     for (const r of batch) {
       if (r.ok) {
         const m = r.molecule;
-        yield {
-          index: m.source.index,
-          line: m.source.line,
-          coords: m.coords,
-          title: m.title,
-          get properties() {
-            return m.properties;
-          },
-        };
+        yield new FrameView(m);
         // the caller asked for the next frame: this one's buffer is free again
         if (pool && pool.length < 100_000) pool.push(m.coords);
       } else if (r.fatal || !options.onError) throw r.error;

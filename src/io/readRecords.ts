@@ -37,9 +37,18 @@ export async function* readRecordsSettled(path: string, options: ReadOptions = {
   for await (const batch of settledBatches(path, options)) yield* batch;
 }
 
+/** Most outcomes queued between two yields: the batch is short-lived garbage, so memory stays flat. */
+const BATCH = 256;
 /**
- * The engine behind the streaming readers: outcomes in batches (one per input chunk, so the per-record
- * cost of async iteration is paid once per chunk). A yielded array is not reused.
+ * Bytes decoded into one string at a time: a 1 MiB string is a large object that only a full collection
+ * frees, while 64 KiB strings die young; peak memory of a 500 MB trajectory fell from ~180 to ~100 MB.
+ */
+const PIECE_BYTES = 1 << 16;
+
+/**
+ * The engine behind the streaming readers: outcomes in batches of at most `BATCH` (so the per-record cost
+ * of async iteration is paid once per batch, and few records are alive at a time). A yielded array is not
+ * reused.
  */
 export async function* settledBatches(
   path: string,
@@ -57,27 +66,43 @@ export async function* settledBatches(
     if (!r.ok && r.fatal) fatal = true;
   };
   const splitter = new LineSplitter(path, limits.maxLineLength);
-  const stopped = (): boolean => fatal;
+  const stopped = (): boolean => fatal || queue.length >= BATCH;
   try {
     const head = await readHead(chunks, splitter);
     const format = options.format ?? detectFormat(path, head.lines.join('\n'));
     const consumer = FORMATS.get(format)!.consumer(path, limits, emit, await consumerExtras(path, format, limits, extras));
     let blocks = head.blocks;
+    let chunk: Uint8Array | null = null;
+    let at = 0;
     for (let done = head.done; ; ) {
       for (const block of blocks) {
         if (blank && /\S/.test(block.text)) blank = false;
-        feedBlock(consumer, block, stopped);
+        for (let k = 0; k < block.count && !fatal; ) {
+          k = feedBlock(consumer, block, stopped, k);
+          if (queue.length >= BATCH && !fatal) {
+            count += queue.length;
+            yield queue.splice(0);
+          }
+        }
+        if (fatal) break;
       }
+      splitter.recycle(blocks);
       if (queue.length > 0 && !fatal) {
         count += queue.length;
         yield queue.splice(0);
       }
       if (fatal || done) break;
-      const next = await chunks.next();
-      if (next.done) {
-        blocks = splitter.endBlocks();
-        done = true;
-      } else blocks = splitter.pushBytesBlocks(next.value);
+      if (chunk === null || at >= chunk.length) {
+        const next = await chunks.next();
+        if (next.done) {
+          blocks = splitter.endBlocks();
+          done = true;
+          continue;
+        }
+        chunk = next.value;
+        at = 0;
+      }
+      blocks = splitter.pushBytesBlocks(chunk.subarray(at, (at += PIECE_BYTES)));
     }
     if (!fatal) consumer.end(splitter.lastLine);
   } catch (err) {

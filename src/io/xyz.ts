@@ -4,13 +4,14 @@
  * per atom line, numbers scanned in place, one Float64Array per frame, and the atom list of the previous frame
  * reused when the elements repeat. A bad frame is reported and reading resumes at the next count line.
  */
-import type { Atom, Molecule } from '../model/molecule.js';
+import type { Atom } from '../model/molecule.js';
 import type { ReadLimits } from './limits.js';
 import { elementSymbol, isLabel } from './elementSymbol.js';
 import { cursor, fieldEnd, scanCount, scanFloat, scanNumberAt, skipBlank } from './numbers.js';
 import { findOverlap, overlapMessage } from './overlap.js';
 import { failure, issue, quote, type Emit, type LineConsumer } from './sink.js';
-import { parseXyzComment } from './xyzComment.js';
+import { XyzRecord } from './xyzRecord.js';
+import { fieldEndIn, scanPlainInto, skipBlankIn } from './rangeScan.js';
 
 /** Options of the XYZ consumer beyond the limits. */
 export interface XyzConsumerOptions {
@@ -55,23 +56,35 @@ export class XyzConsumer implements LineConsumer {
   ) {}
 
   feed(line: string, lineNo: number): void {
+    this.feedRange(line, 0, line.length, lineNo);
+  }
+
+  /**
+   * Reads line `text[start, end)`. Count and atom lines are scanned in place; a line off the common path
+   * (a bad or unusual line, an element that changes) is re-read as a string, so messages stay the same.
+   */
+  feedRange(text: string, start: number, end: number, lineNo: number): void {
     switch (this.state) {
       case State.Atoms:
-        this.atomLine(line, lineNo);
+        if (!this.atomInPlace(text, start, end)) this.atomLine(lineOf(text, start, end), lineNo);
         return;
       case State.Count:
-        this.countLine(line, lineNo);
+        this.countLine(text, start, end, lineNo);
         return;
       case State.Comment:
-        this.title = line.trim();
+        this.title = lineOf(text, start, end).trim();
         this.state = State.Atoms;
         return;
-      case State.SkipAtoms:
-        if (isCountLine(line)) this.countLine(line, lineNo);
+      case State.SkipAtoms: {
+        const line = lineOf(text, start, end);
+        if (isCountLine(line)) this.countLine(line, 0, line.length, lineNo);
         else if (++this.found >= this.count) this.state = State.Count;
         return;
-      case State.Resync:
-        if (isCountLine(line)) this.countLine(line, lineNo);
+      }
+      case State.Resync: {
+        const line = lineOf(text, start, end);
+        if (isCountLine(line)) this.countLine(line, 0, line.length, lineNo);
+      }
     }
   }
 
@@ -81,12 +94,13 @@ export class XyzConsumer implements LineConsumer {
     }
   }
 
-  private countLine(line: string, lineNo: number): void {
-    const s = skipBlank(line, 0);
-    if (s === line.length) return; // blank lines between frames
-    const e = fieldEnd(line, s);
-    const n = skipBlank(line, e) === line.length ? scanCount(line, s, e) : -1;
+  private countLine(text: string, start: number, end: number, lineNo: number): void {
+    const s = skipBlankIn(text, start, end);
+    if (s === end) return; // blank lines between frames
+    const e = fieldEndIn(text, s, end);
+    const n = skipBlankIn(text, e, end) === end ? scanCount(text, s, e) : -1;
     if (n < 0) {
+      const line = lineOf(text, start, end);
       const more = this.frame > 0 && looksLikeAtom(line);
       const message = more
         ? `more atom lines than the count line of frame ${this.frame} says (${this.count})`
@@ -105,7 +119,7 @@ export class XyzConsumer implements LineConsumer {
     this.found = 0;
     if (n === 0) return this.fail('wrong-count', lineNo, 'atom count is 0', State.Count);
     if (n > this.limits.maxAtoms) {
-      const shown = e - s > 15 ? line.slice(s, e) : String(n);
+      const shown = e - s > 15 ? text.slice(s, e) : String(n);
       const message = `count line says ${shown} atoms; the limit is ${this.limits.maxAtoms} (option maxAtoms)`;
       return this.fail('too-many-atoms', lineNo, message, State.Resync);
     }
@@ -135,6 +149,27 @@ export class XyzConsumer implements LineConsumer {
     if (this.found === this.count) this.finish();
   }
 
+  /**
+   * The hot path: atom `found` from a well-formed line whose element is the one of the previous frame.
+   * False for anything else, which `atomLine` then reads afresh.
+   */
+  private atomInPlace(text: string, start: number, end: number): boolean {
+    if (!this.sameAsPrev) return false;
+    const k = this.found;
+    const s = skipBlankIn(text, start, end);
+    const e = fieldEndIn(text, s, end);
+    const prev = this.prevTokens[k]!;
+    if (prev.length !== e - s || !text.startsWith(prev, s)) return false;
+    // -1 from any of the three (an unusual or bad field): the string path decides
+    const coords = this.coords;
+    const px = scanPlainInto(text, e, end, coords, 3 * k);
+    const py = px < 0 ? -1 : scanPlainInto(text, px, end, coords, 3 * k + 1);
+    if (py < 0 || scanPlainInto(text, py, end, coords, 3 * k + 2) < 0) return false;
+    this.found = k + 1;
+    if (this.found === this.count) this.finish();
+    return true;
+  }
+
   /** Slow path: says which field of an atom line is missing, not a number or not finite. */
   private badCoordinates(line: string, lineNo: number, s: number, e: number): void {
     let p = e;
@@ -154,7 +189,7 @@ export class XyzConsumer implements LineConsumer {
   private shortAtomLine(line: string, lineNo: number, s: number): void {
     if (s === line.length || isCountLine(line)) {
       this.fail('wrong-count', this.start, `expected ${this.count} atoms, found ${this.found}`, State.Count);
-      if (s !== line.length) this.countLine(line, lineNo);
+      if (s !== line.length) this.countLine(line, 0, line.length, lineNo);
       return;
     }
     this.badAtom(lineNo, `expected an element and x y z, found ${quote(line)}`, 'bad-atom-line');
@@ -191,19 +226,8 @@ export class XyzConsumer implements LineConsumer {
     }
     this.prevAtoms = atoms;
     this.prevTokens.length = n;
-    const title = this.title;
-    let properties: Readonly<Record<string, string>> | null = null;
-    const molecule: Molecule = {
-      title,
-      atoms,
-      coords: this.coords,
-      bonds: null,
-      // parsed on first use: a trajectory reader rarely needs the comment's key=value pairs
-      get properties() {
-        return (properties ??= parseXyzComment(title));
-      },
-      source: { file: this.file, format: 'xyz', index: this.frame, line: this.start },
-    };
+    const source = { file: this.file, format: 'xyz' as const, index: this.frame, line: this.start };
+    const molecule = new XyzRecord(this.title, atoms, this.coords, source);
     this.emit({ ok: true, molecule });
   }
 
@@ -218,6 +242,11 @@ export class XyzConsumer implements LineConsumer {
     this.prevAtoms = [];
     this.emit(failure(issue(code, this.file, line, message)));
   }
+}
+
+/** Line `text[start, end)` as a string (the string itself when it is the whole line). */
+function lineOf(text: string, start: number, end: number): string {
+  return start === 0 && end === text.length ? text : text.slice(start, end);
 }
 
 /** A line with one non-negative integer and nothing else. */
