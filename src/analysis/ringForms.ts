@@ -72,12 +72,11 @@ function planeSides(pts: Vec3[], others: Vec3[]): number[] | null {
   return others.map((p) => dot(sub(p, a!), n));
 }
 
-function subsets(n: number, k: number): number[][] {
+/** Every k-element subset of 0…n−1, each ascending, in lexicographic order. */
+function subsets(n: number, k: number, from = 0): number[][] {
   if (k === 0) return [[]];
   const out: number[][] = [];
-  for (let i = 0; i < n; i++) {
-    for (const rest of subsets(n, k - 1)) if (rest.every((r) => r > i)) out.push([i, ...rest]);
-  }
+  for (let i = from; i <= n - k; i++) for (const rest of subsets(n, k - 1, i + 1)) out.push([i, ...rest]);
   return out;
 }
 
