@@ -4,6 +4,7 @@
  * correctly rounded multiplication or division of two exact doubles (Clinger 1990, PLDI, "fast path");
  * anything longer falls back to `Number()` on the validated text.
  */
+import { scanPlainInto } from './rangeScan.js';
 
 const POW10 = Array.from({ length: 23 }, (_, i) => 10 ** i);
 const SPACE = 32;
@@ -158,45 +159,20 @@ export const cursor = { end: 0 };
 
 /**
  * Skips blanks from `i`, then parses one number and leaves `cursor.end` just past it: the XYZ hot path,
- * one pass per field. Plain decimals (`-1.234567`) are computed here; exponents, long mantissas and
+ * one pass per field. Plain decimals (`-1.234567`) go through `scanPlainInto`; exponents, long mantissas and
  * malformed text go through `scanFloat` (NaN when it is no number, also for a missing field).
  */
 export function scanNumberAt(line: string, i: number): number {
-  let c = line.charCodeAt(i);
-  while (c === SPACE || c === TAB) c = line.charCodeAt(++i);
-  const start = i;
-  let negative = false;
-  if (c === 45) {
-    negative = true;
-    c = line.charCodeAt(++i);
-  } else if (c === 43) c = line.charCodeAt(++i);
-  let mantissa = 0;
-  let digits = 0;
-  let scale = 0;
-  let any = false;
-  while (c >= 48 && c <= 57) {
-    mantissa = mantissa * 10 + (c - 48);
-    if (mantissa !== 0) digits++;
-    any = true;
-    c = line.charCodeAt(++i);
+  const end = scanPlainInto(line, i, line.length, ONE, 0);
+  if (end >= 0) {
+    cursor.end = end;
+    return ONE[0]!;
   }
-  if (c === 46) {
-    c = line.charCodeAt(++i);
-    while (c >= 48 && c <= 57) {
-      mantissa = mantissa * 10 + (c - 48);
-      if (mantissa !== 0) digits++;
-      scale--;
-      any = true;
-      c = line.charCodeAt(++i);
-    }
-  }
-  const ended = i >= line.length || c === SPACE || c === TAB || c === 13;
-  if (!any || !ended || digits > 15 || scale < -22) {
-    const e = fieldEnd(line, start);
-    cursor.end = e;
-    return e === start ? Number.NaN : scanFloat(line, start, e);
-  }
-  cursor.end = i;
-  const value = scale === 0 ? mantissa : mantissa / POW10[-scale]!;
-  return negative ? -value : value;
+  const start = skipBlank(line, i);
+  const e = fieldEnd(line, start);
+  cursor.end = e;
+  return e === start ? Number.NaN : scanFloat(line, start, e);
 }
+
+/** One-slot buffer for `scanPlainInto` when the caller wants the number back. */
+const ONE = new Float64Array(1);
