@@ -167,8 +167,8 @@ export function layoutNewman(view: NewmanView, mol: Molecule, options: NewmanLay
     x0 = Math.min(x0, b.x0); x1 = Math.max(x1, b.x1); y0 = Math.min(y0, b.y0); y1 = Math.max(y1, b.y1);
   }
   const captionLines = [
-    ...(caption ? newmanCaption(view, mol, marks, angles) : []).map((text) => ({ text, role: 'caption' })),
-    ...couplingLines(view, mol, options.couplings ?? []).map((text) => ({ text, role: 'coupling-label' })),
+    ...(caption ? newmanCaption(view, mol, marks, angles, labels) : []).map((text) => ({ text, role: 'caption' })),
+    ...couplingLines(view, mol, options.couplings ?? [], labels).map((text) => ({ text, role: 'coupling-label' })),
   ];
   const capStyle = textStyle(metrics, 'caption');
   const capTop = y1 + Math.max(metrics.gap * 2, capStyle.fontSize * 0.7);
@@ -188,7 +188,7 @@ export function layoutNewman(view: NewmanView, mol: Molecule, options: NewmanLay
     width: x1 - x0 + 2 * metrics.margin,
     height: y1 - y0 + 2 * metrics.margin,
     title: `Newman projection along ${mol.atoms[view.front]!.element}${view.front + 1}–${mol.atoms[view.back]!.element}${view.back + 1}`,
-    desc: newmanDescription(view, mol, marks, angles),
+    desc: newmanDescription(view, mol, marks, angles, labels),
     items: shifted,
   };
 }

@@ -121,3 +121,17 @@ describe('layoutNewman', () => {
     );
   });
 });
+
+describe('layoutNewman with atom names', () => {
+  it('layoutNewman(…, { labels: "name" }) names atoms the same way in the labels, the caption and the description', () => {
+    const base = butane(65);
+    const names = base.atoms.map((a, i) => (i < 4 ? `C${String.fromCharCode(65 + i)}` : `H${i}`));
+    const m = { ...base, atoms: base.atoms.map((a, i) => ({ ...a, name: names[i]! })) };
+    const s = scene(m, 1, 2, { labels: 'name' });
+    const caption = texts(s, 'caption').map((t) => t.text);
+    expect(caption[0]).toMatch(/^CB–CC, /);
+    expect(caption[1]).toMatch(/^CA\/CD [+−]\d+°/);
+    expect(texts(s, 'atom-label').map((t) => t.text)).toEqual(expect.arrayContaining(['CA', 'CD']));
+    expect(s.desc).toContain('Viewed from CB (front) towards CC (back)');
+  });
+});
