@@ -1,6 +1,4 @@
 /** SVG → vector PDF with pdfkit + svg-to-pdfkit, text in the embedded DejaVu Sans, fixed dates (reproducible). */
-import PDFDocument from 'pdfkit';
-import SVGtoPDF from 'svg-to-pdfkit';
 import { usageError } from '../model/errors.js';
 import { FONT_FILE, FONT_FILE_BOLD } from './svgWindow.js';
 
@@ -19,8 +17,10 @@ export function svgSizePt(svg: string): { width: number; height: number } {
  * A one-page PDF of the SVG at its own size; `currentColor` prints black.
  * @example writeFileSync('fig.pdf', await renderPdf(svg))
  */
-export function renderPdf(svg: string): Promise<Uint8Array> {
+export async function renderPdf(svg: string): Promise<Uint8Array> {
   const { width, height } = svgSizePt(svg);
+  // loaded on first use: pdfkit takes about 0.2 s to load, and most runs write no PDF
+  const [{ default: PDFDocument }, { default: SVGtoPDF }] = await Promise.all([import('pdfkit'), import('svg-to-pdfkit')]);
   const doc = new PDFDocument({ autoFirstPage: false, margin: 0, info: { CreationDate: new Date(0), ModDate: new Date(0), Producer: 'conformark', Creator: 'conformark' } });
   doc.registerFont('DejaVu Sans', FONT_FILE);
   doc.registerFont('DejaVu Sans Bold', FONT_FILE_BOLD);
@@ -33,5 +33,5 @@ export function renderPdf(svg: string): Promise<Uint8Array> {
   });
   SVGtoPDF(doc, svg, 0, 0, { width, height, assumePt: true, fontCallback: (_family, bold) => (bold ? 'DejaVu Sans Bold' : 'DejaVu Sans') });
   doc.end();
-  return done;
+  return await done;
 }
