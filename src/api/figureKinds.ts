@@ -24,6 +24,8 @@ export interface FigureContext {
   readonly theme: Theme;
   /** Id prefix of this figure (unique on a page). */
   readonly idPrefix: string;
+  /** Hydrogens on ring atoms in ring figures: `show` (default) or `hide` (small panels read better without). */
+  readonly ringHydrogens?: 'show' | 'hide';
 }
 
 /** A drawn figure: SVG text and its size in the theme's unit. */
@@ -51,7 +53,7 @@ const ring: FigureRenderer = (ctx, target) => {
   if (target.ring === undefined) throw new Error('ring figure without a ring');
   // chairFigure numbers rings from 1 among `rings`; it picks the template view for chairs, else the projection
   const { svg, scene, warnings } = chairFigure(ctx.molecule, {
-    ring: target.ring + 1, graph: ctx.graph, rings: ctx.rings, theme: ctx.theme, idPrefix: ctx.idPrefix,
+    ring: target.ring + 1, graph: ctx.graph, rings: ctx.rings, theme: ctx.theme, idPrefix: ctx.idPrefix, hydrogens: ctx.ringHydrogens,
   });
   return { svg, width: scene.width, height: scene.height, warnings };
 };
