@@ -18,7 +18,7 @@ export function ensembleText(report: EnsembleReport): string {
   const rows = report.conformers.map((c) => [
     c.duplicateOf === null ? String(++rank) : '–',
     `r${String(c.record).padStart(width, '0')}`,
-    cut(c.title, 32),
+    cut(c.title, 48),
     fixed(c.energy, 4),
     fixed(c.relativeEnergy, 2),
     c.duplicateOf === null ? percentText(c.population) : `dup of r${String(c.duplicateOf).padStart(width, '0')}`,
