@@ -25,6 +25,7 @@ import { figureBytes, type FigureFormat } from './writeFigure.js';
 import { supportTables } from './supportTables.js';
 import { TABLE_WRITERS, fixed, type TableFormat } from './tableText.js';
 import { jsonText } from './jsonText.js';
+import { previousOutputs, removeStale } from './staleOutputs.js';
 
 /** Options of {@link batchFile}. */
 export interface BatchOptions {
@@ -120,6 +121,7 @@ function plan(a: RecordAnalysis, width: number, prefix: string, lowest: number |
  * @example const { manifest } = await batchFile('conformers.sdf', 'si-figures', { bonds: 'rotatable' })
  */
 export async function batchFile(path: string, dir: string, options: BatchOptions = {}): Promise<BatchResult> {
+  const previous = previousOutputs(dir, 'conformark/batch@1');
   const theme = loadTheme(options.theme);
   const formats = options.formats ?? ['svg'];
   const prefix = options.idPrefix ?? '';
@@ -220,5 +222,6 @@ export async function batchFile(path: string, dir: string, options: BatchOptions
     errors: errors.map(({ record, code, line, message }) => ({ record, code, line, message })),
   };
   writeAtomic(join(dir, 'manifest.json'), jsonText(manifest));
+  removeStale(dir, previous, new Set([...figures, ...tables].map((f) => f.path)));
   return { manifest, errors, warnings, notes };
 }

@@ -26,6 +26,15 @@ beforeAll(async () => {
 const readManifest = (dir: string): BatchManifest => JSON.parse(readFileSync(join(dir, 'manifest.json'), 'utf8'));
 
 describe('batchFile', () => {
+  it('batchFile run again into the same folder removes what the earlier run wrote and this one did not, and nothing else', async () => {
+    const dir = temp();
+    await batchFile(input, dir, { tables: ['csv'] });
+    writeFileSync(join(dir, 'notes.txt'), 'my own file');
+    const { manifest } = await batchFile(input, dir, { bonds: '1-2', tables: [], sheet: false });
+    const listed = [...manifest.figures, ...manifest.tables].map((f) => f.path);
+    expect(readdirSync(dir).sort()).toEqual([...listed, 'manifest.json', 'notes.txt'].sort());
+  });
+
   it('batchFile draws one Newman projection per ring bond of every record, named by record and bond', async () => {
     const dir = temp();
     const { manifest, errors } = await batchFile(input, dir);
