@@ -8,7 +8,7 @@ import { join } from 'node:path';
 import { ConformarkError, type Warning } from '../model/errors.js';
 import type { Molecule } from '../model/molecule.js';
 import type { StreamOptions } from '../io/readRecords.js';
-import { holdCounter, type HoldOptions } from './holdLimits.js';
+import type { HoldOptions } from './holdLimits.js';
 import { writeAtomic } from '../io/writeAtomic.js';
 import type { BondSet } from '../analysis/figureBonds.js';
 import type { CouplingOptions } from '../analysis/coupling.js';
@@ -17,7 +17,7 @@ import type { Theme } from '../render/theme.js';
 import { loadTheme } from '../render/themes.js';
 import { prepareRecord } from './prepare.js';
 import { analyseRecord, recordLabel, type RecordAnalysis } from './recordAnalysis.js';
-import { recordOutcomes, type RecordError } from './recordStream.js';
+import { goodRecords, type RecordError } from './recordStream.js';
 import { canDraw, type FigureKind } from './figureKinds.js';
 import { drawTasks, type FigureJob, type RecordTask } from './batchRender.js';
 import { contactSheet, type ContactPanel } from './contactSheet.js';
@@ -131,14 +131,7 @@ export async function batchFile(path: string, dir: string, options: BatchOptions
 
   // 1. Read and analyse every record; a bad one becomes an error entry and the batch goes on.
   const analysed: { molecule: Molecule; analysis: RecordAnalysis }[] = [];
-  const hold = holdCounter(path, options.hold);
-  for await (const outcome of recordOutcomes(path, options.read)) {
-    if ('error' in outcome) {
-      errors.push(outcome.error);
-      continue;
-    }
-    hold.add(outcome.molecule);
-    const mol = outcome.molecule;
+  for await (const mol of goodRecords(path, options, errors)) {
     try {
       const prepared = prepareRecord(mol);
       const analysis = analyseRecord(prepared, { bonds: options.bonds, coupling: options.coupling, energy: options.energy });

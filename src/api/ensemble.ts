@@ -10,7 +10,7 @@
 import { ConformarkError, usageError, type Warning } from '../model/errors.js';
 import type { Molecule } from '../model/molecule.js';
 import type { StreamOptions } from '../io/readRecords.js';
-import { holdCounter, type HoldOptions } from './holdLimits.js';
+import type { HoldOptions } from './holdLimits.js';
 import { findEnergy, normalizeEnergyUnit, type EnergyOptions } from '../io/energy.js';
 import { toKcalPerMol } from '../model/energyUnits.js';
 import { boltzmannPopulations, ensembleAverage } from '../analysis/boltzmann.js';
@@ -18,7 +18,7 @@ import { findDuplicates } from '../analysis/duplicates.js';
 import { analyzeRing } from '../analysis/ringAnalysis.js';
 import { isSkippedCoupling, ringCouplings, type Coupling, type CouplingMethod, type CouplingOptions } from '../analysis/coupling.js';
 import { prepareRecord, type PreparedRecord } from './prepare.js';
-import { recordOutcomes, type RecordError } from './recordStream.js';
+import { goodRecords, type RecordError } from './recordStream.js';
 
 /** Options of {@link ensembleFile} / {@link ensembleOf}. */
 export interface EnsembleOptions {
@@ -184,14 +184,7 @@ export async function ensembleFile(path: string, options: EnsembleOptions = {}):
   }
   const errors: RecordError[] = [];
   const good: Molecule[] = [];
-  const hold = holdCounter(path, options.hold);
-  for await (const outcome of recordOutcomes(path, options.read)) {
-    if ('error' in outcome) {
-      errors.push(outcome.error);
-      continue;
-    }
-    hold.add(outcome.molecule);
-    const mol = outcome.molecule;
+  for await (const mol of goodRecords(path, options, errors)) {
     try {
       if (!findEnergy(mol, options.energy)) throw usageError('no-energy', `record ${mol.source.index} has no energy; it is left out`);
       degeneracyOf(mol, options.degeneracyField);

@@ -4,6 +4,7 @@
  */
 import type { Molecule } from '../model/molecule.js';
 import { readRecordsSettled, type StreamOptions } from '../io/readRecords.js';
+import { heldRecords, type HoldOptions } from './holdLimits.js';
 
 /** A record problem as batch and ensemble report it (`manifest.json` `errors[]`). */
 export interface RecordError {
@@ -35,4 +36,23 @@ export async function* recordOutcomes(path: string, options: StreamOptions = {})
     for (const i of r.error.issues) yield { error: { record, code: i.code, file: i.file, line: i.line, message: i.message } };
     if (r.fatal || issue === undefined) return;
   }
+}
+
+/**
+ * The good records of `path`, counted against the hold limits; each bad record's problems are appended to
+ * `errors` and reading goes on.
+ * @example for await (const mol of goodRecords('big.sdf', {}, errors)) analyse(mol)
+ */
+export async function* goodRecords(
+  path: string,
+  options: { readonly read?: StreamOptions; readonly hold?: HoldOptions },
+  errors: RecordError[],
+): AsyncGenerator<Molecule> {
+  async function* molecules(): AsyncGenerator<Molecule> {
+    for await (const outcome of recordOutcomes(path, options.read)) {
+      if ('error' in outcome) errors.push(outcome.error);
+      else yield outcome.molecule;
+    }
+  }
+  yield* heldRecords(molecules(), path, options.hold);
 }
