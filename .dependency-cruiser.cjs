@@ -28,6 +28,39 @@ forbidden.push(
   },
   { name: 'no-cycles', severity: 'error', from: {}, to: { circular: true } },
 );
+/**
+ * Rooms inside a layer (DEVELOPERS.md, "Where each job lives"): shared rooms never import a job's room, and a
+ * job's room imports another job's room only where listed. Paths are relative to the layer.
+ */
+const rooms = {
+  layout: {
+    shared: ['scene\\.ts', 'text/'],
+    jobs: { newman: [], ring: [], plots: [], sheets: [] },
+  },
+  api: {
+    shared: ['[^/]+\\.ts', 'figures/', 'tables/', 'inspect/'],
+    jobs: { build: [], trajectory: [], batch: [], ensemble: [], demo: ['batch', 'build', 'ensemble', 'trajectory'] },
+  },
+};
+for (const [layer, { shared, jobs }] of Object.entries(rooms)) {
+  const jobNames = Object.keys(jobs);
+  forbidden.push({
+    name: `${layer}-shared-rooms-import-no-job-room`,
+    severity: 'error',
+    from: { path: `^src/${layer}/(${shared.join('|')})` },
+    to: { path: `^src/${layer}/(${jobNames.join('|')})/` },
+  });
+  for (const [job, may] of Object.entries(jobs)) {
+    const others = jobNames.filter((j) => j !== job && !may.includes(j));
+    if (others.length === 0) continue;
+    forbidden.push({
+      name: `${layer}-${job}-imports-only-its-listed-rooms`,
+      severity: 'error',
+      from: { path: `^src/${layer}/${job}/` },
+      to: { path: `^src/${layer}/(${others.join('|')})/` },
+    });
+  }
+}
 module.exports = {
   forbidden,
   options: {

@@ -17,7 +17,7 @@ import { usageError } from '../model/errors.js';
 import type { Primitive, RoleStyle, Theme } from './theme.js';
 import { loadTheme } from './themes.js';
 import { attrText, escapeXml, svgNumber, svgValue } from './svgMarkup.js';
-import { MAX_LABEL_LENGTH, safeText } from '../layout/safeText.js';
+import { MAX_LABEL_LENGTH, safeText } from '../layout/text/safeText.js';
 
 /** Longest `<title>`/`<desc>` written, characters (labels: `MAX_LABEL_LENGTH`). */
 const MAX_DESCRIPTION_LENGTH = 2000;

@@ -1,7 +1,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { Molecule as OclMolecule } from 'openchemlib';
-import { buildConformers, BUILD_ENERGY_FIELD } from '../../src/api/build.js';
-import type { BuildResult } from '../../src/api/build.js';
+import { buildConformers, BUILD_ENERGY_FIELD } from '../../src/api/build/build.js';
+import type { BuildResult } from '../../src/api/build/build.js';
 import { formatSdf } from '../../src/io/writeSdf.js';
 import { cremerPople } from '../../src/geometry/cremerPople.js';
 import { angleBetween, DEG, sub } from '../../src/geometry/vec3.js';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { reshapeRing, ringTargets, ringWalk, sixRingShape } from '../../src/api/buildRingForms.js';
+import { reshapeRing, ringTargets, ringWalk, sixRingShape } from '../../src/api/build/buildRingForms.js';
 import { cremerPople, displacementsFromModes, ringFromDisplacements, sixRingModes } from '../../src/geometry/cremerPople.js';
 import { angleBetween, DEG } from '../../src/geometry/vec3.js';
 import type { Vec3 } from '../../src/model/molecule.js';

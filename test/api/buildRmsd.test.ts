@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { symmetricRmsd } from '../../src/api/buildRmsd.js';
-import { heavyAtomPermutations } from '../../src/api/buildSymmetry.js';
+import { symmetricRmsd } from '../../src/api/build/buildRmsd.js';
+import { heavyAtomPermutations } from '../../src/api/build/buildSymmetry.js';
 import type { Atom, Bond } from '../../src/model/molecule.js';
 
 const carbon: Atom = { element: 'C', name: null };

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { chairFigure } from '../../src/api/chair.js';
+import { chairFigure } from '../../src/api/figures/chair.js';
 import { ConformarkError } from '../../src/model/errors.js';
 import type { Molecule } from '../../src/model/molecule.js';
 import { d2TwistBoat, ringMolecule } from '../helpers/ringBuilders.js';

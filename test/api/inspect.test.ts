@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { inspectFile, inspectMolecule } from '../../src/api/inspect.js';
-import { inspectText } from '../../src/api/inspectText.js';
+import { inspectFile, inspectMolecule } from '../../src/api/inspect/inspect.js';
+import { inspectText } from '../../src/api/inspect/inspectText.js';
 import { jsonText } from '../../src/api/jsonText.js';
 import { parseText } from '../../src/io/parseText.js';
 import { formatXyz } from '../../src/io/formatXyz.js';

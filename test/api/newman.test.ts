@@ -2,8 +2,8 @@ import { mkdtempSync, readFileSync, existsSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { newmanFigure } from '../../src/api/newman.js';
-import { figureFormat, writeFigure } from '../../src/api/writeFigure.js';
+import { newmanFigure } from '../../src/api/figures/newman.js';
+import { figureFormat, writeFigure } from '../../src/api/figures/writeFigure.js';
 import { butane } from '../helpers/newmanMolecules.js';
 
 describe('newmanFigure', () => {

@@ -3,7 +3,7 @@ import { mkdtempSync, readFileSync, rmSync, writeFileSync, existsSync } from 'no
 import { gzipSync } from 'node:zlib';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { analyzeTrajectory } from '../../src/api/trajectory.js';
+import { analyzeTrajectory } from '../../src/api/trajectory/trajectory.js';
 import { ConformarkError } from '../../src/model/errors.js';
 import { fiveRingWalk, sixRingWalk, walkXyz, type WalkFrame } from '../helpers/puckerWalk.js';
 

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { TrajectoryRows } from '../../src/api/trajectoryRows.js';
-import type { TextStream } from '../../src/api/csvStream.js';
+import { TrajectoryRows } from '../../src/api/trajectory/trajectoryRows.js';
+import type { TextStream } from '../../src/api/trajectory/csvStream.js';
 
 function rows(): { rows: TrajectoryRows; text: () => string } {
   let got = '';

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { mkdtempSync, readFileSync, readdirSync, rmSync, statSync, writeFileSync, mkdirSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, relative } from 'node:path';
-import { renderDemo } from '../../src/api/demo.js';
+import { renderDemo } from '../../src/api/demo/demo.js';
 
 const walk = (dir: string, root = dir): string[] =>
   readdirSync(dir).flatMap((n) => (statSync(join(dir, n)).isDirectory() ? walk(join(dir, n), root) : [relative(root, join(dir, n))])).sort();

@@ -1,5 +1,5 @@
 /** Ring figures used as goldens and in gallery/: every molecule built from internal coordinates, none hand-drawn. */
-import { chairFigure, type ChairFigureOptions } from '../../src/api/chair.js';
+import { chairFigure, type ChairFigureOptions } from '../../src/api/figures/chair.js';
 import type { Molecule } from '../../src/model/molecule.js';
 import { d2TwistBoat, d3dChair, ringMolecule } from './ringBuilders.js';
 

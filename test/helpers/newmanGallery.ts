@@ -1,5 +1,5 @@
 /** The Newman figures used as goldens and in gallery/: each built from internal coordinates, none hand-drawn. */
-import { newmanFigure, type NewmanFigureOptions } from '../../src/api/newman.js';
+import { newmanFigure, type NewmanFigureOptions } from '../../src/api/figures/newman.js';
 import type { Molecule } from '../../src/model/molecule.js';
 import { butane, cyclohexaneChair, ethane } from './newmanMolecules.js';
 

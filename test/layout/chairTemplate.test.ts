@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { chairFigure } from '../../src/api/chair.js';
-import { shoelaceArea } from '../../src/layout/ringView.js';
+import { chairFigure } from '../../src/api/figures/chair.js';
+import { shoelaceArea } from '../../src/layout/ring/ringView.js';
 import { d3dChair, ringMolecule } from '../helpers/ringBuilders.js';
 import { readLines, type DrawnLine } from '../helpers/svgRead.js';
 

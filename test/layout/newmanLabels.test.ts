@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { boxAt, rayCandidates, type TextBox } from '../../src/layout/newmanLabels.js';
-import { firstFree, firstFreeOf, reachToEdge, type Box, type Obstacles } from '../../src/layout/labelPlacement.js';
+import { rayCandidates } from '../../src/layout/newman/newmanLabels.js';
+import { boxAt, type TextBox } from '../../src/layout/text/textBox.js';
+import { firstFree, firstFreeOf, reachToEdge, type Box, type Obstacles } from '../../src/layout/text/labelPlacement.js';
 
 /** The candidate list as it was built before candidates were made on demand: all 217, then a stable sort. */
 function eagerCandidates(cx: number, cy: number, azDeg: number, from: number, t: TextBox, step: number): Box[] {

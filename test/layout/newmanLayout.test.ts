@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { newmanView } from '../../src/analysis/newman.js';
-import { layoutNewman, type NewmanLayoutOptions } from '../../src/layout/newmanLayout.js';
-import { textBox } from '../../src/layout/newmanLabels.js';
-import { boxesOverlap, grow, segmentHitsBox, type Box } from '../../src/layout/labelPlacement.js';
+import { layoutNewman, type NewmanLayoutOptions } from '../../src/layout/newman/newmanLayout.js';
+import { textBox } from '../../src/layout/text/textBox.js';
+import { boxesOverlap, grow, segmentHitsBox, type Box } from '../../src/layout/text/labelPlacement.js';
 import type { Scene, SceneLine, SceneText } from '../../src/layout/scene.js';
 import { buildGraph } from '../../src/perceive/graph.js';
 import { loadTheme, sceneMetrics } from '../../src/render/themes.js';

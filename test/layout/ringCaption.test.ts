@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { descriptorRuns, numberText } from '../../src/layout/ringCaption.js';
-import { groupText } from '../../src/layout/ringLabels.js';
+import { descriptorRuns, numberText } from '../../src/layout/ring/ringCaption.js';
+import { groupText } from '../../src/layout/ring/ringLabels.js';
 import { buildGraph } from '../../src/perceive/graph.js';
 
 describe('descriptorRuns', () => {

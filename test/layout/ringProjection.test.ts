@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { analyzeRing } from '../../src/analysis/ringAnalysis.js';
-import { ringProjection } from '../../src/layout/ringProjection.js';
-import { shoelaceArea } from '../../src/layout/ringView.js';
-import { chairFigure } from '../../src/api/chair.js';
+import { ringProjection } from '../../src/layout/ring/ringProjection.js';
+import { shoelaceArea } from '../../src/layout/ring/ringView.js';
+import { chairFigure } from '../../src/api/figures/chair.js';
 import type { Molecule, Vec3 } from '../../src/model/molecule.js';
 import { d2TwistBoat, d3dChair, fiveRingAt, ringMolecule, sixRingAt } from '../helpers/ringBuilders.js';
 import { readLines } from '../helpers/svgRead.js';

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { newmanView } from '../../src/analysis/newman.js';
-import { layoutNewman, type NewmanLayoutOptions } from '../../src/layout/newmanLayout.js';
+import { layoutNewman, type NewmanLayoutOptions } from '../../src/layout/newman/newmanLayout.js';
 import { buildGraph } from '../../src/perceive/graph.js';
 import { torsion } from '../../src/geometry/torsion.js';
 import { renderSvg } from '../../src/render/renderSvg.js';

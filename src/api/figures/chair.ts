@@ -1,0 +1,110 @@
+/** One call from a molecule to a themed ring figure: pick the ring, analyse it, place it, lay it out, render. */
+import type { Molecule } from '../../model/molecule.js';
+import { usageError, type Warning } from '../../model/errors.js';
+import { buildGraph, type Graph } from '../../perceive/graph.js';
+import { withBonds } from '../../perceive/withBonds.js';
+import { findRings } from '../../perceive/findRings.js';
+import { analyzeRing, type AnalyzeRingOptions, type RingAnalysis } from '../../analysis/ringAnalysis.js';
+import { chairTemplate } from '../../layout/ring/chairTemplate.js';
+import { ringProjection } from '../../layout/ring/ringProjection.js';
+import { layoutRing } from '../../layout/ring/ringLayout.js';
+import type { RingLabels } from '../../layout/ring/ringLabels.js';
+import type { RingHydrogens, RingPlacement, RingView } from '../../layout/ring/ringPlacement.js';
+import type { Scene } from '../../layout/scene.js';
+import type { Theme } from '../../render/theme.js';
+import { loadTheme, sceneMetrics } from '../../render/themes.js';
+import { measureText } from '../../render/svgWindow.js';
+import { renderSvg } from '../../render/renderSvg.js';
+
+/** Options of {@link chairFigure}. Atom indices are 0-based. */
+export interface ChairFigureOptions {
+  /**
+   * The ring: its number among `rings` as `inspect` lists it (counted from 1), or its atoms (0-based, in bonded
+   * order). Default: the first six-membered ring, else the first ring.
+   */
+  readonly ring?: readonly number[] | number;
+  /** Use an atom-list `ring` in exactly its order (it fixes the Cremer–Pople numbering). Default false: reference order. */
+  readonly ordered?: boolean;
+  /** `template` (trade chair, chairs only) or `projected` (true view, any ring). Default: template for chairs, else projected. */
+  readonly view?: RingView;
+  /** Viewer elevation above the ring's mean plane, degrees. Default 20. */
+  readonly elevationDeg?: number;
+  /** Draw hydrogens on ring atoms. Default `show`. */
+  readonly hydrogens?: RingHydrogens;
+  /** Label text: `element` (condensed groups and ring locants), `id` (element + number) or `name`. Default `element`. */
+  readonly labels?: RingLabels;
+  /** Caption with shape, descriptor and Q/θ/φ. Default true. */
+  readonly caption?: boolean;
+  /** Theme object, built-in name or path. Default `column`. */
+  readonly theme?: Theme | string;
+  /** Id prefix for the SVG. Default `chair-`. */
+  readonly idPrefix?: string;
+  /** Bond graph. Default: from `mol.bonds`, perceived from coordinates when the file has none. */
+  readonly graph?: Graph;
+  /** Rings of the record (0-based cyclic atom lists). Default: `findRings(graph)`. */
+  readonly rings?: readonly (readonly number[])[];
+  /** Ring analysis options (thresholds), passed to `analyzeRing`. */
+  readonly analysis?: Omit<AnalyzeRingOptions, 'id' | 'ordered'>;
+}
+
+/** What {@link chairFigure} returns. */
+export interface ChairFigure {
+  readonly svg: string;
+  readonly ring: RingAnalysis;
+  readonly scene: Scene;
+  readonly view: RingView;
+  /** Screen placement of every drawn atom and bond (Å), before styling. */
+  readonly placement: RingPlacement;
+  readonly warnings: readonly Warning[];
+}
+
+/**
+ * Ring figure as semantic SVG with the analysis behind it: the trade chair for chairs, else the true view.
+ * @example const { svg, ring } = chairFigure(mol, { ring: 1, theme: 'projector' })
+ * @throws ConformarkError `no-ring`, `unknown-ring`, `not-a-chair` (template view of another shape).
+ */
+export function chairFigure(mol: Molecule, options: ChairFigureOptions = {}): ChairFigure {
+  // 1. Graph, rings, and the ring to draw.
+  const graph = options.graph ?? graphOf(mol);
+  const rings = options.rings ?? findRings(graph);
+  const { atoms, id } = pickRing(mol, rings, options.ring);
+  const ring = analyzeRing(mol, graph, atoms, { ...options.analysis, ...(id === undefined ? {} : { id }), ordered: options.ordered ?? false });
+  // 2. View and placement.
+  const view = options.view ?? (ring.shape === 'chair' ? 'template' : 'projected');
+  const placeOptions = { elevationDeg: options.elevationDeg, hydrogens: options.hydrogens };
+  const placement = view === 'template' ? chairTemplate(ring, mol, placeOptions) : ringProjection(ring, mol, placeOptions);
+  // 3. Layout and rendering with the theme (a background-coloured halo role added when the theme has none).
+  const theme = withHalo(loadTheme(options.theme));
+  const scene = layoutRing(placement, ring, mol, graph, { labels: options.labels, caption: options.caption, metrics: sceneMetrics(theme), measure: measureText });
+  const svg = renderSvg(scene, theme, { idPrefix: options.idPrefix ?? 'chair-' });
+  return { svg, ring, scene, view, placement, warnings: ring.warnings };
+}
+
+function graphOf(mol: Molecule): Graph {
+  const bonded = mol.bonds ? mol : withBonds(mol);
+  return buildGraph(bonded.atoms.length, bonded.bonds ?? []);
+}
+
+function pickRing(mol: Molecule, rings: readonly (readonly number[])[], ring: ChairFigureOptions['ring']): { atoms: readonly number[]; id?: number } {
+  if (Array.isArray(ring)) {
+    const found = rings.findIndex((r) => r.length === ring.length && r.every((a) => ring.includes(a)));
+    return found < 0 ? { atoms: ring } : { atoms: ring, id: found + 1 };
+  }
+  if (rings.length === 0) throw usageError('no-ring', `no ring to draw in record ${mol.source.index}`, mol.source.file);
+  if (typeof ring === 'number') {
+    const atoms = rings[ring - 1];
+    if (!Number.isInteger(ring) || !atoms) throw usageError('unknown-ring', `ring ${ring} does not exist (the record has ${rings.length} ring${rings.length === 1 ? '' : 's'})`, mol.source.file);
+    return { atoms, id: ring };
+  }
+  const six = rings.findIndex((r) => r.length === 6);
+  const k = six < 0 ? 0 : six;
+  return { atoms: rings[k]!, id: k + 1 };
+}
+
+/** The theme with a `bond-halo` role (background colour, three ring-bond widths) unless it styles one itself. */
+function withHalo(theme: Theme): Theme {
+  if (theme.roles['bond-halo']) return theme;
+  const width = Math.max(theme.defaults.line.strokeWidth ?? 1, theme.roles['ring-bond']?.strokeWidth ?? 0);
+  const stroke = theme.background === 'none' ? '#ffffff' : theme.background;
+  return { ...theme, roles: { ...theme.roles, 'bond-halo': { stroke, strokeWidth: 3 * width, strokeLinecap: 'butt' } } };
+}

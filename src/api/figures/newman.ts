@@ -1,0 +1,69 @@
+/** One call from a molecule to a themed Newman figure: analyse → lay out → render. */
+import type { Molecule } from '../../model/molecule.js';
+import { usageError, type Warning } from '../../model/errors.js';
+import { buildGraph, type Graph } from '../../perceive/graph.js';
+import { newmanView, type NewmanView } from '../../analysis/newman.js';
+import { couplingsAcrossBond, isSkippedCoupling, type Coupling, type CouplingOptions } from '../../analysis/coupling.js';
+import { layoutNewman, type NewmanLayoutOptions } from '../../layout/newman/newmanLayout.js';
+import type { Scene } from '../../layout/scene.js';
+import type { Theme } from '../../render/theme.js';
+import { loadTheme, sceneMetrics } from '../../render/themes.js';
+import { measureText } from '../../render/svgWindow.js';
+import { renderSvg } from '../../render/renderSvg.js';
+import { sceneTextWarnings } from '../../layout/text/safeText.js';
+
+/** Options of {@link newmanFigure}. Atom indices are 0-based. */
+export interface NewmanFigureOptions extends Omit<NewmanLayoutOptions, 'metrics' | 'measure' | 'couplings'> {
+  /**
+   * Print predicted ³J(H,H) for every H/H pair across the bond: `true` for the default equation
+   * (Haasnoot–de Leeuw–Altona 1980), or coupling options. Default false.
+   */
+  readonly couplings?: boolean | CouplingOptions;
+  /** The bond, [front, back]: the viewer looks from front to back. Required. */
+  readonly bond: readonly [number, number];
+  /** Front substituent pointing up. Default: the ring neighbour for ring bonds, else the heaviest. */
+  readonly up?: number;
+  /** Rings (cyclic 0-based atom lists) for ring bonds and ring substituents. Default none. */
+  readonly rings?: readonly (readonly number[])[];
+  /** Bond graph. Default: built from `mol.bonds` (perceive bonds first when the file has none). */
+  readonly graph?: Graph;
+  /** Theme object, built-in name or path. Default `column`. */
+  readonly theme?: Theme | string;
+  /** Id prefix for the SVG. Default `newman-`. */
+  readonly idPrefix?: string;
+}
+
+/** What {@link newmanFigure} returns. */
+export interface NewmanFigure {
+  readonly svg: string;
+  readonly view: NewmanView;
+  readonly scene: Scene;
+  readonly warnings: readonly Warning[];
+  /** Predicted couplings across the bond (empty unless asked for). */
+  readonly couplings: readonly Coupling[];
+}
+
+/**
+ * Newman projection of a bond as semantic SVG, with the analysis behind it.
+ * @example const { svg, view } = newmanFigure(mol, { bond: [1, 2], theme: 'projector' })
+ */
+export function newmanFigure(mol: Molecule, options: NewmanFigureOptions): NewmanFigure {
+  const graph = options.graph ?? graphOf(mol);
+  const [front, back] = options.bond;
+  const view = newmanView(mol, graph, front, back, { up: options.up, rings: options.rings });
+  const theme = loadTheme(options.theme);
+  const couplings = options.couplings
+    ? couplingsAcrossBond(mol, graph, front, back, options.couplings === true ? {} : options.couplings).filter(
+        (c): c is Coupling => !isSkippedCoupling(c),
+      )
+    : [];
+  const scene = layoutNewman(view, mol, { ...options, couplings, metrics: sceneMetrics(theme), measure: measureText });
+  const svg = renderSvg(scene, theme, { idPrefix: options.idPrefix });
+  const warnings = [...view.warnings, ...couplings.flatMap((c) => c.warnings), ...sceneTextWarnings(scene)];
+  return { svg, view, scene, warnings, couplings };
+}
+
+function graphOf(mol: Molecule): Graph {
+  if (!mol.bonds) throw usageError('no-bonds', `record ${mol.source.index} of ${mol.source.file} has no bonds: perceive them first (withBonds)`, mol.source.file);
+  return buildGraph(mol.atoms.length, mol.bonds);
+}

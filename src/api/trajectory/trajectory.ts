@@ -1,0 +1,231 @@
+/**
+ * `trajectory`: ring puckering over every frame of a trajectory, streamed in constant memory. Frame 1 fixes
+ * bonds, ring and numbering; each analysed frame then costs one Cremer–Pople kernel call, one shape lookup, a
+ * CSV line and a few counters. Writes `puckering.csv`, `summary.json` and the figures into a folder.
+ */
+import { resolve } from 'node:path';
+import { ConformarkError, ParseError, usageError, type Warning } from '../../model/errors.js';
+import type { FormatName } from '../../model/molecule.js';
+import { readFrames, type Frame } from '../../io/readFrames.js';
+import type { ReadOptions } from '../../io/limits.js';
+import { protectInput } from '../../io/writeAtomic.js';
+import { PHASE_THRESHOLD } from '../../geometry/cremerPople.js';
+import { PuckerValues } from '../../geometry/puckerKernel.js';
+import { torsionAt } from '../../geometry/torsionAt.js';
+import { PLANAR_FORM, PUCKERED_FORM } from '../../analysis/shapeTable.js';
+import { TrajectoryStats, type DwellStats } from '../../analysis/trajectoryStats.js';
+import type { RingShapeOptions } from '../../analysis/ringShape.js';
+import type { FigureFormat } from '../figures/writeFigure.js';
+import type { Theme } from '../../render/theme.js';
+import { readRecord } from '../prepare.js';
+import { TextStream } from './csvStream.js';
+import { TrajectoryRows } from './trajectoryRows.js';
+import { parseTimestep, type Timestep } from './timestep.js';
+import { trajectorySetup } from './trajectorySetup.js';
+import { TrajectoryPlots } from './trajectoryPlots.js';
+import { SHAPE_ORDER } from './trajectoryTheme.js';
+import { writeTrajectoryFiles } from './trajectoryOutput.js';
+
+/** Options of `analyzeTrajectory`. */
+export interface TrajectoryOptions extends RingShapeOptions {
+  /** Output folder (created). Required. */
+  readonly dir: string;
+  /** Ring: its number as `inspect` lists it, or an ordered atom list `1-2-3-4-5-6`. Default `1`. */
+  readonly ring?: string;
+  /** Analyse every Nth frame, counted from `from`. Default 1. */
+  readonly stride?: number;
+  /** First frame analysed (from 1). Default 1. */
+  readonly from?: number;
+  /** Last frame analysed. Default: the last frame. */
+  readonly to?: number;
+  /** Time between file frames, e.g. `{ value: 2, unit: 'ps' }` or `"2 ps"`. Default none (x is the frame). */
+  readonly timestep?: Timestep | string;
+  /** Torsions to add as CSV columns, `A-B-C-D` (numbers from 1 or atom names). Default none. */
+  readonly torsions?: readonly string[];
+  /** Figure formats written for each figure. Default `['svg']`. */
+  readonly formats?: readonly FigureFormat[];
+  /** Theme object, built-in name or path. Default `column`. */
+  readonly theme?: Theme | string;
+  /** Bond tolerance for perception on frame 1, Å. Default 0.40. */
+  readonly toleranceA?: number;
+  /** Outer radius of the five-ring wheel, degrees of τm. Default 60. */
+  readonly maxAmplitudeDeg?: number;
+  /** Reader options (format, limits). */
+  readonly read?: ReadOptions;
+  /** Called every few thousand frames and at the end with frames read and frames analysed. */
+  readonly onProgress?: (framesRead: number, framesAnalysed: number) => void;
+}
+
+/** What `analyzeTrajectory` returns (the content of `summary.json` plus the files written). */
+export interface TrajectorySummary {
+  readonly schema: 'conformark/trajectory@1';
+  readonly source: { readonly path: string; readonly format: FormatName | null };
+  readonly ring: { readonly atoms: readonly number[]; readonly size: number; readonly locants: readonly string[]; readonly referenceRule: string };
+  readonly frames: { readonly read: number; readonly analysed: number; readonly first: number; readonly last: number; readonly from: number; readonly to: number | null; readonly stride: number };
+  readonly timestep: Timestep | null;
+  readonly occupancy: Readonly<Record<string, number>>;
+  readonly counts: Readonly<Record<string, number>>;
+  readonly transitions: Readonly<Record<string, Readonly<Record<string, number>>>>;
+  readonly dwell: Readonly<Record<string, DwellStats>>;
+  /** The same statistics by ring form (descriptor, or the shape word where there is none): a chair flip shows here. */
+  readonly forms: {
+    readonly occupancy: Readonly<Record<string, number>>;
+    readonly transitions: Readonly<Record<string, Readonly<Record<string, number>>>>;
+    readonly dwell: Readonly<Record<string, DwellStats>>;
+  };
+  readonly torsions: readonly string[];
+  readonly warnings: readonly Warning[];
+  /** Paths written (relative to `dir`). */
+  readonly files: readonly string[];
+}
+
+function frameIssue(path: string, frame: Frame, code: string, message: string): ConformarkError {
+  return new ConformarkError({ code, file: path, line: frame.line, message: `frame ${frame.index} ${message}` });
+}
+
+/** Adds "frame N:" to a reader error about the frame after `last`. */
+function withFrame(err: ParseError, last: number): ParseError {
+  return new ParseError(err.issues.map((i) => ({ ...i, message: `frame ${last + 1}: ${i.message}` })));
+}
+
+/**
+ * Analyses ring puckering over a trajectory (multi-frame XYZ, multi-MODEL PDB, multi-record SDF; `.gz` too)
+ * and writes `puckering.csv`, `summary.json`, `pucker-map`, `time-series` and `occupancy` figures to `dir`.
+ * @example const s = await analyzeTrajectory('md.xyz.gz', { dir: 'out', ring: '1', timestep: '2 ps' }); s.occupancy.chair
+ */
+export async function analyzeTrajectory(path: string, options: TrajectoryOptions): Promise<TrajectorySummary> {
+  // 1. Options, resolved once.
+  if (path === '-') throw usageError('bad-input', 'trajectory reads its file twice (frame 1 first): give a file, not standard input');
+  const stride = options.stride ?? 1;
+  const from = options.from ?? 1;
+  const to = options.to ?? Infinity;
+  if (to < from) throw usageError('bad-option', `--to ${to} is before --from ${from}`);
+  const timestep = typeof options.timestep === 'string' ? parseTimestep(options.timestep) : options.timestep ?? null;
+  protectInput(path);
+  // 2. Frame 1 fixes bonds, ring, numbering and torsions.
+  const first = await readRecord(path, 1, options.read);
+  const setup = trajectorySetup(first, { ...options, ring: options.ring ?? '1', torsions: options.torsions ?? [] });
+  const { ring, kernel, table, torsions } = setup;
+  const n = ring.length;
+  const maxRingAtom = Math.max(...ring, ...torsions.flat());
+  const dir = resolve(options.dir);
+  const csv = new TextStream(resolve(dir, 'puckering.csv'));
+  const timeColumn = timestep ? [`time_${timestep.unit}`] : [];
+  const fiveColumns = n === 5 ? ['P', 'tauM'] : [];
+  csv.write(`${['frame', ...timeColumn, 'Q', 'thetaDeg', 'phiDeg', ...fiveColumns, 'shape', 'descriptor', ...setup.torsionColumns].join(',')}\n`);
+  const rows = new TrajectoryRows(csv);
+  const stats = new TrajectoryStats({ stride, timestep: timestep?.value });
+  const formStats = new TrajectoryStats({ stride, timestep: timestep?.value });
+  const plots = new TrajectoryPlots(n, options.maxAmplitudeDeg ?? 60);
+  const catOf = (form: number) => SHAPE_ORDER.indexOf(table.shapeOf(form) as (typeof SHAPE_ORDER)[number]);
+  const formCat = table.forms.map((_, i) => catOf(i));
+  const planarCat = catOf(PLANAR_FORM);
+  const puckeredCat = catOf(PUCKERED_FORM);
+  const csvDescriptor = table.descriptors.map((d) => (d === null ? '' : /[",]/.test(d) ? `"${d.replace(/"/g, '""')}"` : d));
+  const v = new PuckerValues();
+  let read = 0;
+  let analysed = 0;
+  let firstAnalysed = 0;
+  let lastAnalysed = 0;
+  let planarFrames = 0;
+  const it = readFrames(path, { ...options.read, reuse: true })[Symbol.asyncIterator]();
+  try {
+    // 3. The stream: one line and a few counters per analysed frame.
+    for (;;) {
+      let next: IteratorResult<Frame>;
+      try {
+        next = await it.next();
+      } catch (err) {
+        throw err instanceof ParseError ? withFrame(err, read) : err;
+      }
+      if (next.done) break;
+      const frame = next.value;
+      read++;
+      if (options.onProgress && (read & 4095) === 0) options.onProgress(read, analysed);
+      const idx = frame.index;
+      if (idx < from) continue;
+      if (idx > to) break;
+      if ((idx - from) % stride !== 0) continue;
+      const c = frame.coords;
+      if (c.length !== 3 * setup.atomCount) {
+        const missing = c.length / 3 <= maxRingAtom ? ` (atom ${maxRingAtom + 1}, used by the analysis, is missing)` : '';
+        throw frameIssue(path, frame, 'frame-atom-count', `has ${c.length / 3} atoms, frame 1 had ${setup.atomCount}${missing}`);
+      }
+      if (!kernel.measure(c, ring, v) || !Number.isFinite(v.Q)) {
+        throw frameIssue(path, frame, 'degenerate-ring', Number.isFinite(v.Q) ? 'has collinear ring atoms' : 'has non-finite ring atom coordinates');
+      }
+      const form = table.classify(v.Q, v.q2, v.thetaDeg, v.phaseDeg);
+      const planar = form === PLANAR_FORM;
+      if (planar) planarFrames++;
+      const shape = table.shapeOf(form);
+      const phi = !planar && n > 4 && v.q2 >= PHASE_THRESHOLD ? v.phaseDeg : NaN;
+      // the CSV row, written as bytes (no string per number: see TrajectoryRows)
+      rows.number(idx, 0);
+      if (timestep) {
+        rows.comma();
+        rows.number((idx - 1) * timestep.value, 6);
+      }
+      rows.comma();
+      rows.number(v.Q, 4);
+      rows.comma();
+      if (!planar && n === 6) rows.number(v.thetaDeg, 2);
+      rows.comma();
+      if (!Number.isNaN(phi)) rows.number(phi, 2);
+      if (n === 5) {
+        rows.comma();
+        if (!planar && !Number.isNaN(v.pDeg)) rows.number(v.pDeg, 2);
+        rows.comma();
+        if (!planar && !Number.isNaN(v.pDeg)) rows.number(v.tauMDeg, 2);
+      }
+      rows.comma();
+      rows.text(shape);
+      rows.comma();
+      if (form >= 0) rows.text(csvDescriptor[form]!);
+      for (let k = 0; k < torsions.length; k++) {
+        const [a, b, cc, d] = torsions[k]!;
+        const t = torsionAt(c, a, b, cc, d);
+        rows.comma();
+        if (!Number.isNaN(t)) rows.number(t, 2);
+      }
+      rows.newline();
+      stats.add(shape);
+      formStats.add(table.descriptorOf(form) ?? shape);
+      plots.add(idx, v, phi, planar, form >= 0 ? formCat[form]! : planar ? planarCat : puckeredCat);
+      if (analysed++ === 0) firstAnalysed = idx;
+      lastAnalysed = idx;
+    }
+    options.onProgress?.(read, analysed);
+    if (analysed === 0) {
+      const range = Number.isFinite(to) ? `from frame ${from} to ${to}` : `from frame ${from}`;
+      throw usageError('no-frames', `no frames to analyse ${range}: the file has ${read} frame${read === 1 ? '' : 's'}`, path);
+    }
+    rows.flush();
+    csv.commit();
+  } catch (err) {
+    csv.abort();
+    await it.return?.(undefined);
+    throw err;
+  }
+  // 4. Summary and figures.
+  const warnings: Warning[] = [];
+  if (planarFrames > 0) warnings.push({ code: 'ring-nearly-planar', message: `${planarFrames} frames have a nearly planar ring (shape planar, no θ or φ)` });
+  if (plots.clamped > 0) warnings.push({ code: 'amplitude-beyond-wheel', message: `${plots.clamped} frames have τm beyond ${options.maxAmplitudeDeg ?? 60}°: drawn at the rim of the wheel` });
+  const st = stats.summary();
+  const fs = formStats.summary();
+  const summary: Omit<TrajectorySummary, 'files'> = {
+    schema: 'conformark/trajectory@1',
+    source: { path, format: first.source.format },
+    ring: { atoms: Array.from(ring, (a) => a + 1), size: n, locants: setup.locants, referenceRule: setup.referenceRule },
+    frames: { read, analysed, first: firstAnalysed, last: lastAnalysed, from, to: Number.isFinite(to) ? to : null, stride },
+    timestep,
+    occupancy: st.occupancy,
+    counts: st.counts,
+    transitions: st.transitions,
+    dwell: st.dwell,
+    forms: { occupancy: fs.occupancy, transitions: fs.transitions, dwell: fs.dwell },
+    torsions: setup.torsionColumns,
+    warnings,
+  };
+  const files = await writeTrajectoryFiles(dir, summary, plots, setup, { formats: options.formats ?? ['svg'], theme: options.theme, timestep });
+  return { ...summary, files: ['puckering.csv', ...files] };
+}

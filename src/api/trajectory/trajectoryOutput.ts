@@ -1,0 +1,76 @@
+/** Writes `summary.json` and the three trajectory figures (each in every requested format). */
+import { join } from 'node:path';
+import { jsonText } from '../jsonText.js';
+import { writeAtomic } from '../../io/writeAtomic.js';
+import { writeFigure, type FigureFormat } from '../figures/writeFigure.js';
+import { loadTheme, sceneMetrics } from '../../render/themes.js';
+import { renderSvg } from '../../render/renderSvg.js';
+import { measureText } from '../../render/svgWindow.js';
+import type { Theme } from '../../render/theme.js';
+import type { Scene } from '../../layout/scene.js';
+import { layoutPuckerMap } from '../../layout/plots/puckerMapLayout.js';
+import { layoutPseudorotationWheel } from '../../layout/plots/pseudorotationWheelLayout.js';
+import { layoutTimeSeries, type SeriesSpec } from '../../layout/plots/timeSeriesLayout.js';
+import { layoutOccupancy } from '../../layout/plots/occupancyLayout.js';
+import type { Timestep } from './timestep.js';
+import type { TrajectorySetup } from './trajectorySetup.js';
+import type { TrajectoryPlots } from './trajectoryPlots.js';
+import { SHAPE_ORDER, withTrajectoryRoles } from './trajectoryTheme.js';
+
+/** Figure options of a run. */
+export interface TrajectoryFigureOptions {
+  readonly formats: readonly FigureFormat[];
+  readonly theme?: Theme | string;
+  readonly timestep: Timestep | null;
+}
+
+const angle = (label: string, max: number, step: number, wraps: boolean): SeriesSpec => ({
+  label, min: 0, max, wraps, ticks: Array.from({ length: max / step + 1 }, (_, i) => i * step),
+});
+
+/** Series shown in the time series for a ring size. */
+export function seriesSpecs(size: number, plots: TrajectoryPlots): SeriesSpec[] {
+  if (size === 6) return [angle('θ (°)', 180, 45, false), angle('φ (°)', 360, 90, true)];
+  if (size === 5) return [angle('P (°)', 360, 90, true), angle('τm (°)', plots.maxAmplitudeDeg, 20, false)];
+  let qMax = 0.2;
+  for (const b of plots.series.buckets()) qMax = Math.max(qMax, b.ranges[0]?.[1] ?? 0);
+  const top = Math.ceil(qMax * 10) / 10;
+  return [{ label: 'Q (Å)', min: 0, max: top, wraps: false, ticks: [0, top / 2, top] }, angle('φ₂ (°)', 360, 90, true)];
+}
+
+/** The scenes of a run: map (six- and five-rings only), time series, occupancy. */
+export function trajectoryScenes(summary: { occupancy: Record<string, number>; frames: { analysed: number } }, plots: TrajectoryPlots, setup: TrajectorySetup, theme: Theme, timestep: Timestep | null): Map<string, Scene> {
+  const metrics = sceneMetrics(theme);
+  const common = { metrics, measure: measureText, ringLabel: setup.label };
+  const scenes = new Map<string, Scene>();
+  const n = setup.ring.length;
+  if (n === 6) scenes.set('pucker-map', layoutPuckerMap(plots.north, plots.south, setup.table, common));
+  if (n === 5) scenes.set('pucker-map', layoutPseudorotationWheel(plots.north, setup.table, plots.maxAmplitudeDeg, common));
+  scenes.set('time-series', layoutTimeSeries(plots.series.buckets(), seriesSpecs(n, plots), SHAPE_ORDER, { ...common, ...(timestep ? { timestep } : {}) }));
+  scenes.set('occupancy', layoutOccupancy(summary.occupancy, { ...common, frames: summary.frames.analysed }));
+  return scenes;
+}
+
+/** Writes summary.json and every figure; returns the paths written, relative to `dir`. */
+export async function writeTrajectoryFiles(
+  dir: string,
+  summary: { occupancy: Record<string, number>; frames: { analysed: number } },
+  plots: TrajectoryPlots,
+  setup: TrajectorySetup,
+  options: TrajectoryFigureOptions,
+): Promise<string[]> {
+  const files = ['summary.json'];
+  const theme = withTrajectoryRoles(loadTheme(options.theme));
+  const figures: [string, string][] = [];
+  for (const [name, scene] of trajectoryScenes(summary, plots, setup, theme, options.timestep)) {
+    figures.push([name, renderSvg(scene, theme, { idPrefix: `${name}-` })]);
+  }
+  for (const [name, svg] of figures) {
+    for (const format of options.formats) {
+      await writeFigure(join(dir, `${name}.${format}`), svg, { format });
+      files.push(`${name}.${format}`);
+    }
+  }
+  writeAtomic(join(dir, 'summary.json'), jsonText({ ...summary, files: ['puckering.csv', ...files] }));
+  return files;
+}

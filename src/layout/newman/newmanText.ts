@@ -1,0 +1,59 @@
+/** Words of a Newman figure: torsion values, caption lines and the SVG description. */
+import type { Molecule } from '../../model/molecule.js';
+import type { NewmanView } from '../../analysis/newman.js';
+import { COUPLING_METHOD_SHORT_NAMES, type CouplingMethod } from '../../analysis/coupling.js';
+import type { NewmanAngles } from './newmanAngles.js';
+import { atomLabelText, type NewmanLabels } from '../text/atomLabelText.js';
+
+const MINUS = '\u2212';
+
+/** A signed whole-degree torsion as printed (`+65°`, `−65°`, `180°`, `0°`); `n/a` when undefined. */
+export function torsionText(deg: number | null): string {
+  if (deg === null) return 'n/a';
+  const r = Math.round(deg);
+  if (r === 0 || r === 180 || r === -180) return `${Math.abs(r)}°`;
+  return `${r < 0 ? MINUS : '+'}${Math.abs(r)}°`;
+}
+
+/** How an atom is named in captions: its file name when the figure is labelled by names, else element + number. */
+const id = (mol: Molecule, i: number, labels: NewmanLabels = 'id') => atomLabelText(mol, i, labels === 'name' ? 'name' : 'id');
+
+/** One-line statement of a marked pair: `C1/C4 +65° (+sc, gauche)`. */
+function pairLine(view: NewmanView, mol: Molecule, x: number, y: number, labels: NewmanLabels): string {
+  const p = view.pairs.find((q) => q.front === x && q.back === y);
+  if (!p || p.torsionDeg === null) return `${id(mol, x, labels)}/${id(mol, y, labels)} undefined`;
+  return `${id(mol, x, labels)}/${id(mol, y, labels)} ${torsionText(p.torsionDeg)} (${p.klynePrelog!.replace('-', MINUS)}, ${p.relation})`;
+}
+
+/** Caption lines: the bond with its conformation, then one line per marked pair. */
+export function newmanCaption(view: NewmanView, mol: Molecule, marks: readonly (readonly [number, number])[], angles: NewmanAngles, labels: NewmanLabels = 'id'): string[] {
+  const head = `${id(mol, view.front, labels)}–${id(mol, view.back, labels)}${view.conformation ? `, ${view.conformation}` : ''}${angles === 'ideal' ? ' (ideal spacing)' : ''}`;
+  return [head, ...marks.map(([x, y]) => pairLine(view, mol, x, y, labels))];
+}
+
+/** The `<desc>` text: viewing direction, drawing mode, conformation and marked torsions. */
+export function newmanDescription(view: NewmanView, mol: Molecule, marks: readonly (readonly [number, number])[], angles: NewmanAngles, labels: NewmanLabels = 'id'): string {
+  const mode = angles === 'ideal' ? 'bonds at ideal even spacing, measured torsions printed' : 'bonds at their measured projected azimuths';
+  const parts = [
+    `Viewed from ${id(mol, view.front, labels)} (front) towards ${id(mol, view.back, labels)} (back); ${mode}.`,
+    view.conformation ? `Conformation: ${view.conformation} (smallest offset ${Math.round(view.minOffsetDeg!)}°).` : 'Conformation undefined.',
+    ...marks.map(([x, y]) => `${pairLine(view, mol, x, y, labels)}.`),
+  ];
+  return parts.join(' ');
+}
+
+/** Lines `³J(H7,H12) 12.8 Hz (−176°)` for each predicted coupling, in the order given, plus the method. */
+export function couplingLines(
+  view: NewmanView,
+  mol: Molecule,
+  couplings: readonly { front: number; back: number; jHz: number; method: string }[],
+  labels: NewmanLabels = 'id',
+): string[] {
+  if (couplings.length === 0) return [];
+  const lines = couplings.map((c) => {
+    const p = view.pairs.find((q) => q.front === c.front && q.back === c.back);
+    return `³J(${id(mol, c.front, labels)},${id(mol, c.back, labels)}) ${c.jHz.toFixed(1)} Hz (${torsionText(p?.torsionDeg ?? null)})`;
+  });
+  const method = couplings[0]!.method;
+  return [...lines, `³J estimates: ${COUPLING_METHOD_SHORT_NAMES.get(method as CouplingMethod) ?? method}`];
+}

@@ -1,0 +1,80 @@
+/**
+ * Words of a ring figure: the caption (shape and typeset IUPAC descriptor; Q, θ, φ) and the SVG title and
+ * description. Descriptor locants that are digits become Unicode super/subscript digits (DejaVu Sans has them);
+ * any other locant (the ring O, lists with commas) becomes a smaller raised or lowered run.
+ */
+import type { RingAnalysis } from '../../analysis/ringAnalysis.js';
+import type { DescriptorParts } from '../../analysis/ringDescriptor.js';
+import type { RingView } from './ringPlacement.js';
+
+/** One run of caption text: baseline text, or a smaller raised (`sup`) / lowered (`sub`) run. */
+export interface CaptionRun {
+  readonly text: string;
+  readonly level: 'base' | 'sup' | 'sub';
+}
+
+const SUP = '⁰¹²³⁴⁵⁶⁷⁸⁹';
+const SUB = '₀₁₂₃₄₅₆₇₈₉';
+const MINUS = '\u2212';
+
+/** Runs of a typeset descriptor, e.g. ⁴C₁ as one base run, ^{3,O}B as a raised run and a base run. */
+export function descriptorRuns(parts: DescriptorParts): CaptionRun[] {
+  const runs: CaptionRun[] = [];
+  const push = (text: string, level: CaptionRun['level']) => {
+    if (!text) return;
+    const last = runs[runs.length - 1];
+    if (last && last.level === level) runs[runs.length - 1] = { text: last.text + text, level };
+    else runs.push({ text, level });
+  };
+  const script = (locants: readonly string[], level: 'sup' | 'sub') => {
+    const text = locants.join(',');
+    if (/^\d+$/.test(text)) push([...text].map((d) => (level === 'sup' ? SUP : SUB)[Number(d)]).join(''), 'base');
+    else push(text, level);
+  };
+  script(parts.above, 'sup');
+  push(parts.letter, 'base');
+  script(parts.below, 'sub');
+  return runs;
+}
+
+/** A length or angle as printed: fixed decimals, true minus sign; an em dash when undefined. */
+export function numberText(value: number | null, digits: number): string {
+  if (value === null) return '—';
+  const t = value.toFixed(digits);
+  return Number(t) === 0 ? (0).toFixed(digits) : t.replace('-', MINUS);
+}
+
+/** Caption lines as runs: shape with descriptor (or the view when none), then `Q 0.565 Å  θ 2.1°  φ —`. */
+export function ringCaption(ring: RingAnalysis): CaptionRun[][] {
+  const head: CaptionRun[] = [{ text: `${ring.shape}${ring.descriptorParts ? ' ' : ''}`, level: 'base' }];
+  if (ring.descriptorParts) head.push(...descriptorRuns(ring.descriptorParts));
+  if (ring.fit?.quality === 'distorted') head.push({ text: ' (distorted)', level: 'base' });
+  const pk = ring.puckering;
+  const numbers = [`Q ${numberText(pk.Q, 3)} Å`];
+  if (ring.size === 6) numbers.push(`θ ${numberText(pk.thetaDeg, 1)}°`);
+  numbers.push(`φ ${pk.phiDeg === null ? '—' : `${numberText(pk.phiDeg, 1)}°`}`);
+  return [head, [{ text: numbers.join('  '), level: 'base' }]];
+}
+
+const ids = (ring: RingAnalysis) => ring.atoms.map((a) => a + 1).join('-');
+
+/** The `<title>` of a ring figure. */
+export function ringTitle(ring: RingAnalysis, view: RingView): string {
+  const form = ring.descriptor ? ` ${ring.descriptor}` : '';
+  const what = view === 'template' ? 'Chair drawing' : 'Projected view';
+  return `${what} of ring ${ids(ring)} (${ring.shape}${form})`;
+}
+
+/** The `<desc>` of a ring figure: view, numbers, and every substituent's position and face. */
+export function ringDescription(ring: RingAnalysis, view: RingView, elevationDeg: number, element: (atom: number) => string): string {
+  const how =
+    view === 'template'
+      ? `Trade chair template placed from the measured Cremer–Pople displacements and substituent positions, viewed at ${elevationDeg}° elevation.`
+      : `Orthographic view of the measured coordinates in the ring frame (normal toward the viewer side, ${elevationDeg}° elevation).`;
+  const pk = ring.puckering;
+  const numbers = `Q ${numberText(pk.Q, 3)} Å, θ ${numberText(pk.thetaDeg, 1)}, φ ${numberText(pk.phiDeg, 1)}.`;
+  const subs = ring.substituents
+    .map((s) => `${element(s.atom)}${s.atom + 1} on ${element(s.ringAtom)}${s.ringAtom + 1}: ${s.position ?? 'unclassified'}${s.face ? `, ${s.face}` : ''}`)
+    .join('; ');
+  return `${how} Ring ${ids(ring)}: ${ring.shape}${ring.descriptor ? ` ${ring.descriptor}` : ''}; ${numbers}${subs ? ` Substituents: ${subs}.` : ''}`;
+}

@@ -1,0 +1,210 @@
+/**
+ * Ring placement → Scene. Bonds are drawn far to near, so nearer bonds overpaint farther ones, and where a
+ * nearer bond crosses a farther one a short `bond-halo` line (styled with the background by the theme) is drawn
+ * under the nearer bond to open a gap in the farther. Ring heteroatoms are written at their vertex (bonds stop
+ * short of the symbol); substituent labels sit beyond their bond ends and ring locants beside their vertex,
+ * each measured and placed clear of every line and label (labelPlacement). The caption goes underneath.
+ */
+import type { Molecule } from '../../model/molecule.js';
+import type { Graph } from '../../perceive/graph.js';
+import type { RingAnalysis } from '../../analysis/ringAnalysis.js';
+import { firstFree, grow, type Box, type Obstacles, type Segment } from '../text/labelPlacement.js';
+import { boxAt, textBox, type TextBox } from '../text/textBox.js';
+import { approximateMeasure, DEFAULT_METRICS, shiftItem, textStyle, type Scene, type SceneItem, type SceneLine, type SceneMetrics, type TextMeasure, type TextStyle } from '../scene.js';
+import { ringCaption, ringDescription, ringTitle, type CaptionRun } from './ringCaption.js';
+import { ringAtomLabel, ringVertexLabel, substituentLabel, type RingLabels } from './ringLabels.js';
+import type { RingPlacement } from './ringPlacement.js';
+
+/** Options of {@link layoutRing}. */
+export interface RingLayoutOptions {
+  /** Label text: `element` (condensed groups, ring locants), `id` (element + number) or `name`. Default `element`. */
+  readonly labels?: RingLabels;
+  /** Caption with shape, descriptor and Q/θ/φ under the drawing. Default true. */
+  readonly caption?: boolean;
+  /** Sizes from the theme. Default {@link DEFAULT_METRICS}. */
+  readonly metrics?: SceneMetrics;
+  /** Text width function (the renderer's font measure). Default: 0.6 em per character. */
+  readonly measure?: TextMeasure;
+}
+
+interface Drawn {
+  readonly line: SceneLine;
+  readonly near: number;
+  readonly order: number;
+}
+
+const AZ = (dx: number, dy: number) => (Math.atan2(dx, -dy) * 180) / Math.PI;
+
+/**
+ * Lays out a ring placement (from `chairTemplate` or `ringProjection`) as a Scene.
+ * @example layoutRing(ringProjection(ring, mol), ring, mol, graph, { labels: 'id' })
+ */
+export function layoutRing(placement: RingPlacement, ring: RingAnalysis, mol: Molecule, graph: Graph, options: RingLayoutOptions = {}): Scene {
+  const { labels = 'element', caption = true } = options;
+  const metrics = options.metrics ?? DEFAULT_METRICS;
+  const measure = options.measure ?? approximateMeasure;
+  const k = metrics.bondLength / placement.unitLength;
+  const at = (a: number) => {
+    const p = placement.points.get(a)!;
+    return { x: p.x * k, y: p.y * k, near: p.near };
+  };
+  const labelStyle = textStyle(metrics, 'atom-label');
+  const locantStyle: TextStyle = metrics.text['ring-locant'] ?? { fontSize: labelStyle.fontSize * 0.72, fontWeight: 'normal' };
+  const clearance = metrics.gap * 0.6 + metrics.lineWidth / 2;
+  const obstacles: Obstacles = { boxes: [], segments: [], rings: [] };
+  const texts: SceneItem[] = [];
+  const textBoxes: Box[] = [];
+  const addText = (role: string, text: string, box: Box, t: TextBox, style: TextStyle, atom: number) => {
+    obstacles.boxes.push(box);
+    textBoxes.push(box);
+    texts.push({ type: 'text', role, x: (box.x0 + box.x1) / 2, y: (box.y0 + box.y1) / 2 + t.baseline, text, anchor: 'middle', fontSize: style.fontSize, fontWeight: style.fontWeight, atom });
+  };
+
+  // 1. Ring heteroatom symbols at their vertices; bonds stop short of them.
+  const cut = new Map<number, number>();
+  for (const a of placement.ring) {
+    const text = ringVertexLabel(mol, a);
+    if (!text) continue;
+    const t = textBox(text, labelStyle, measure);
+    const p = at(a);
+    addText('atom-label', text, boxAt(p.x, p.y, t), t, labelStyle, a);
+    cut.set(a, Math.max(t.width, t.height) / 2 + metrics.gap * 0.5);
+  }
+
+  // 2. Bonds, shortened at labelled vertices, sorted far → near (stable).
+  const drawn: Drawn[] = placement.bonds.map((b, order) => {
+    const [p, q] = [at(b.atoms[0]), at(b.atoms[1])];
+    const len = Math.hypot(q.x - p.x, q.y - p.y) || 1;
+    const [ux, uy] = [(q.x - p.x) / len, (q.y - p.y) / len];
+    const c0 = Math.min(cut.get(b.atoms[0]) ?? 0, len / 3);
+    const c1 = Math.min(cut.get(b.atoms[1]) ?? 0, len / 3);
+    const line: SceneLine = { type: 'line', role: b.role, x1: p.x + ux * c0, y1: p.y + uy * c0, x2: q.x - ux * c1, y2: q.y - uy * c1, atoms: [b.atoms[0], b.atoms[1]] };
+    return { line, near: (p.near + q.near) / 2, order };
+  });
+  drawn.sort((a, b) => a.near - b.near || a.order - b.order);
+  const items: SceneItem[] = [];
+  const halfGap = 1.6 * metrics.lineWidth + metrics.gap;
+  drawn.forEach((d, i) => {
+    for (const far of drawn.slice(0, i)) {
+      if (far.line.atoms!.some((a) => d.line.atoms!.includes(a))) continue;
+      const t = crossing(d.line, far.line);
+      if (t === null) continue;
+      const len = Math.hypot(d.line.x2 - d.line.x1, d.line.y2 - d.line.y1);
+      const [t0, t1] = [Math.max(0, t - halfGap / len), Math.min(1, t + halfGap / len)];
+      const pt = (s: number) => [d.line.x1 + s * (d.line.x2 - d.line.x1), d.line.y1 + s * (d.line.y2 - d.line.y1)] as const;
+      const [[x1, y1], [x2, y2]] = [pt(t0), pt(t1)];
+      items.push({ type: 'line', role: 'bond-halo', x1, y1, x2, y2, atoms: d.line.atoms! });
+    }
+    items.push(d.line);
+    obstacles.segments.push(d.line);
+  });
+
+  // 3. Substituent labels beyond their bond ends.
+  const step = Math.max(metrics.gap, labelStyle.fontSize * 0.25);
+  for (const b of placement.bonds) {
+    if (b.role === 'ring-bond') continue;
+    const [from, atom] = b.atoms;
+    const text = substituentLabel(mol, graph, atom, from, labels);
+    const t = textBox(text, labelStyle, measure);
+    const [p, q] = [at(from), at(atom)];
+    const len = Math.hypot(q.x - p.x, q.y - p.y);
+    const candidates = aroundCandidates(p.x, p.y, AZ(q.x - p.x, q.y - p.y), len + metrics.gap + metrics.lineWidth / 2, t, step, 45);
+    addText('atom-label', text, candidates[firstFree(candidates, obstacles, clearance)]!, t, labelStyle, atom);
+  }
+
+  // 4. Ring locants beside their vertices, outward first.
+  const ringPts = placement.ring.map(at);
+  const cx = ringPts.reduce((s, p) => s + p.x, 0) / ringPts.length;
+  const cy = ringPts.reduce((s, p) => s + p.y, 0) / ringPts.length;
+  placement.ring.forEach((a, j) => {
+    const text = ringAtomLabel(mol, ring, j, labels);
+    if (!text) return;
+    const t = textBox(text, locantStyle, measure);
+    const p = at(a);
+    const candidates = aroundCandidates(p.x, p.y, AZ(p.x - cx, p.y - cy), (cut.get(a) ?? 0) + metrics.gap, t, step);
+    addText('ring-locant', text, candidates[firstFree(candidates, obstacles, clearance * 0.8)]!, t, locantStyle, a);
+  });
+
+  // 5. Bounds, caption, shift into positive coordinates.
+  let [x0, y0, x1, y1] = [Infinity, Infinity, -Infinity, -Infinity];
+  for (const it of items) {
+    if (it.type !== 'line') continue;
+    x0 = Math.min(x0, it.x1, it.x2); x1 = Math.max(x1, it.x1, it.x2);
+    y0 = Math.min(y0, it.y1, it.y2); y1 = Math.max(y1, it.y1, it.y2);
+  }
+  [x0, y0, x1, y1] = [x0 - metrics.lineWidth, y0 - metrics.lineWidth, x1 + metrics.lineWidth, y1 + metrics.lineWidth];
+  for (const b of textBoxes.map((bx) => grow(bx, metrics.lineWidth))) {
+    x0 = Math.min(x0, b.x0); x1 = Math.max(x1, b.x1); y0 = Math.min(y0, b.y0); y1 = Math.max(y1, b.y1);
+  }
+  if (caption) {
+    const capStyle = textStyle(metrics, 'caption');
+    const lines = ringCaption(ring);
+    const midX = (x0 + x1) / 2;
+    let top = y1 + Math.max(metrics.gap * 2, capStyle.fontSize * 0.7);
+    for (const runs of lines) {
+      const placed = captionLine(runs, capStyle, measure, midX, top + capStyle.fontSize * 0.73);
+      texts.push(...placed.items);
+      x0 = Math.min(x0, placed.x0); x1 = Math.max(x1, placed.x1);
+      y1 = top + capStyle.fontSize * (0.73 + 0.3);
+      top += capStyle.fontSize * 1.3;
+    }
+  }
+  const dx = metrics.margin - x0;
+  const dy = metrics.margin - y0;
+  const element = (a: number) => mol.atoms[a]!.element;
+  return {
+    kind: placement.view === 'template' ? 'chair' : 'ring-projection',
+    width: x1 - x0 + 2 * metrics.margin,
+    height: y1 - y0 + 2 * metrics.margin,
+    title: ringTitle(ring, placement.view),
+    desc: ringDescription(ring, placement.view, placement.elevationDeg, element),
+    items: [...items, ...texts].map((it) => shiftItem(it, dx, dy)),
+  };
+}
+
+/** Parameter t along `a` where it properly crosses `b` (both interiors), or null. */
+function crossing(a: Segment, b: Segment): number | null {
+  const [rx, ry] = [a.x2 - a.x1, a.y2 - a.y1];
+  const [sx, sy] = [b.x2 - b.x1, b.y2 - b.y1];
+  const den = rx * sy - ry * sx;
+  if (Math.abs(den) < 1e-9) return null;
+  const t = ((b.x1 - a.x1) * sy - (b.y1 - a.y1) * sx) / den;
+  const u = ((b.x1 - a.x1) * ry - (b.y1 - a.y1) * rx) / den;
+  return t > 0.02 && t < 0.98 && u > 0.02 && u < 0.98 ? t : null;
+}
+
+/**
+ * Candidate boxes round a point at distance `from` and beyond, best first: the preferred azimuth, then turning
+ * away from it by up to `maxDevDeg`, then farther out.
+ */
+function aroundCandidates(x: number, y: number, azDeg: number, from: number, t: TextBox, step: number, maxDevDeg = 180): Box[] {
+  const scored: { cost: number; box: Box }[] = [];
+  for (let r = 0; r <= 16; r++) {
+    for (let dev = 0; dev <= maxDevDeg; dev += 15) {
+      for (const sign of dev === 0 || dev === 180 ? [1] : [1, -1]) {
+
+        const a = ((azDeg + sign * dev) * Math.PI) / 180;
+        const [ux, uy] = [Math.sin(a), -Math.cos(a)];
+        const reach = Math.min(Math.abs(ux) < 1e-12 ? Infinity : t.width / 2 / Math.abs(ux), Math.abs(uy) < 1e-12 ? Infinity : t.height / 2 / Math.abs(uy));
+        const d = from + reach + r * step * 0.6;
+        scored.push({ cost: r + dev / 25, box: boxAt(x + d * ux, y + d * uy, t) });
+      }
+    }
+  }
+  return scored.sort((p, q) => p.cost - q.cost).map((s) => s.box);
+}
+
+/** One caption line of runs centred on midX with its baseline at y; sup/sub runs smaller and shifted. */
+function captionLine(runs: readonly CaptionRun[], style: TextStyle, measure: TextMeasure, midX: number, y: number): { items: SceneItem[]; x0: number; x1: number } {
+  const small: TextStyle = { fontSize: style.fontSize * 0.7, fontWeight: style.fontWeight };
+  const sized = runs.map((r) => ({ ...r, style: r.level === 'base' ? style : small, width: measure(r.text, r.level === 'base' ? style : small) }));
+  const total = sized.reduce((s, r) => s + r.width, 0);
+  let x = midX - total / 2;
+  const items: SceneItem[] = sized.map((r) => {
+    const dy = r.level === 'sup' ? -style.fontSize * 0.38 : r.level === 'sub' ? style.fontSize * 0.2 : 0;
+    const item: SceneItem = { type: 'text', role: r.level === 'base' ? 'caption' : `caption-${r.level}`, x, y: y + dy, text: r.text, anchor: 'start', fontSize: r.style.fontSize, fontWeight: r.style.fontWeight };
+    x += r.width;
+    return item;
+  });
+  return { items, x0: midX - total / 2, x1: midX + total / 2 };
+}
