@@ -9,8 +9,18 @@ export interface Atom {
   readonly element: string;
   /** Atom name from the file (PDB atom name, or an SD/XYZ label), or `null` when the file has none. */
   readonly name: string | null;
-  /** PDB residue name, when known. */
+  /** Residue name (PDB resName, mmCIF comp_id, GRO/PSF residue name), when known. */
   readonly residue?: string;
+  /** Residue sequence number as written in the file (PDB resSeq, mmCIF auth_seq_id), when known. */
+  readonly residueNumber?: number;
+  /** Residue insertion code (PDB iCode), `''` when blank; absent when the format has none. */
+  readonly insertionCode?: string;
+  /** Chain identifier (PDB chainID, mmCIF auth_asym_id, PSF segment), `''` when blank; absent when unknown. */
+  readonly chain?: string;
+  /** Atom serial number from the file (PDB/GRO/mmCIF id), which may differ from the file position. */
+  readonly serial?: number;
+  /** Alternate-location letter of the copy kept (`''` when the atom had none). */
+  readonly altLoc?: string;
   /** Formal charge from the file (molfile), 0 when absent. */
   readonly charge?: number;
 }
