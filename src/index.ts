@@ -100,6 +100,8 @@ export type {
   RingPuckering,
   PseudorotationMethod,
 } from './analysis/ringAnalysis.js';
+export { chemicalNumbering } from './analysis/chemicalNumbering.js';
+export type { ChemicalNumbering } from './analysis/chemicalNumbering.js';
 export { toReportRing } from './analysis/ringReport.js';
 export type { ReportRing } from './analysis/ringReport.js';
 // build (area F): SD writer and 3D conformers from SMILES
