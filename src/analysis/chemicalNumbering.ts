@@ -90,3 +90,23 @@ export function chemicalNumbering(mol: Pick<Molecule, 'atoms'>, graph: Graph, ri
   }
   return { names, locants, systems };
 }
+
+/** Sort value of a locant: `4a` just after 4; primes ignored. */
+const locantValue = (l: string) => {
+  const m = /^(\d+)([a-z]?)/.exec(l);
+  return m ? Number(m[1]) + (m[2] ? 0.5 : 0) : Infinity;
+};
+
+/**
+ * A ring in its chemical order (lowest locant first, toward the next locant) with those locants, for analysing
+ * it in the drawn numbering; null for carbohydrate rings (their reference order already is the chemical one)
+ * and when the locants do not walk the ring.
+ * @example chemicalRingOrder(numbering, graph, ring)?.locants // ['1', '2', '3', '4', '5', '6']
+ */
+export function chemicalRingOrder(numbering: ChemicalNumbering, graph: Graph, ring: readonly number[]): { atoms: number[]; locants: string[]; rule: string } | null {
+  const system = numbering.systems.find((s) => ring.every((a) => s.atoms.includes(a)));
+  if (!system || system.carbohydrate || ring.some((a) => !numbering.locants.has(a))) return null;
+  const atoms = [...ring].sort((a, b) => locantValue(numbering.locants.get(a)!) - locantValue(numbering.locants.get(b)!));
+  if (!atoms.every((a, j) => graph.bonded(a, atoms[(j + 1) % atoms.length]!))) return null;
+  return { atoms, locants: atoms.map((a) => numbering.locants.get(a)!), rule: `chemical numbering: ${system.rule}` };
+}

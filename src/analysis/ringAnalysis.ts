@@ -24,6 +24,9 @@ export interface AnalyzeRingOptions extends RingShapeOptions, SubstituentOptions
   readonly id?: number;
   /** Use `ringAtoms` exactly in the given order (user-given ordered ring). Default false: reference order. */
   readonly ordered?: boolean;
+  /** With `ordered`: locants of the positions (chemical locants) and the numbering rule in words. Default: 1…N. */
+  readonly locants?: readonly string[];
+  readonly numberingRule?: string;
   /**
    * Five-ring pseudorotation formula. `auto` (default) uses the Altona–Sundaralingam formula except where
    * |cos P| < 0.2 (P near 90 or 270, where ν2/cos P is unstable), where it uses the Fourier form.
@@ -99,7 +102,7 @@ export function analyzeRing(
   options: AnalyzeRingOptions = {},
 ): RingAnalysis {
   // 1. Reference numbering and Cremer–Pople coordinates in that numbering.
-  const ref = ringReference(mol, graph, ringAtoms, { ordered: options.ordered ?? false });
+  const ref = ringReference(mol, graph, ringAtoms, { ordered: options.ordered ?? false, locants: options.locants, rule: options.numberingRule });
   const atoms = ref.atoms;
   const n = atoms.length;
   const label = atoms.map((a) => a + 1).join('-');

@@ -5,6 +5,8 @@ import { buildGraph, type Graph } from '../../perceive/graph.js';
 import { withBonds } from '../../perceive/withBonds.js';
 import { findRings } from '../../perceive/findRings.js';
 import { analyzeRing, type AnalyzeRingOptions, type RingAnalysis } from '../../analysis/ringAnalysis.js';
+import { chemicalNumbering, chemicalRingOrder } from '../../analysis/chemicalNumbering.js';
+import { legibilityWarnings } from './legibilityWarnings.js';
 import { chairTemplate } from '../../layout/ring/chairTemplate.js';
 import { ringProjection } from '../../layout/ring/ringProjection.js';
 import { layoutRing } from '../../layout/ring/ringLayout.js';
@@ -68,16 +70,25 @@ export function chairFigure(mol: Molecule, options: ChairFigureOptions = {}): Ch
   const graph = options.graph ?? graphOf(mol);
   const rings = options.rings ?? findRings(graph);
   const { atoms, id } = pickRing(mol, rings, options.ring);
-  const ring = analyzeRing(mol, graph, atoms, { ...options.analysis, ...(id === undefined ? {} : { id }), ordered: options.ordered ?? false });
+  // chemical numbering (carbohydrate convention, lowest locants) names the drawn atoms; a ring that is not a
+  // sugar ring is analysed in that numbering too, so the caption's descriptor uses the locants on the drawing
+  const numbering = chemicalNumbering(mol, graph, rings);
+  const chemical = options.ordered || options.labels === 'id' || options.labels === 'name' ? null : chemicalRingOrder(numbering, graph, atoms);
+  const ring = analyzeRing(mol, graph, chemical?.atoms ?? atoms, {
+    ...options.analysis,
+    ...(id === undefined ? {} : { id }),
+    ordered: options.ordered ?? chemical !== null,
+    ...(chemical ? { locants: chemical.locants, numberingRule: chemical.rule } : {}),
+  });
   // 2. View and placement.
   const view = options.view ?? (ring.shape === 'chair' ? 'template' : 'projected');
   const placeOptions = { elevationDeg: options.elevationDeg, hydrogens: options.hydrogens };
   const placement = view === 'template' ? chairTemplate(ring, mol, placeOptions) : ringProjection(ring, mol, placeOptions);
   // 3. Layout and rendering with the theme (a background-coloured halo role added when the theme has none).
   const theme = withHalo(loadTheme(options.theme));
-  const scene = layoutRing(placement, ring, mol, graph, { labels: options.labels, caption: options.caption, metrics: sceneMetrics(theme), measure: measureText });
+  const scene = layoutRing(placement, ring, mol, graph, { labels: options.labels, caption: options.caption, metrics: sceneMetrics(theme), measure: measureText, names: numbering.names, rings });
   const svg = renderSvg(scene, theme, { idPrefix: options.idPrefix ?? 'chair-' });
-  return { svg, ring, scene, view, placement, warnings: ring.warnings };
+  return { svg, ring, scene, view, placement, warnings: [...ring.warnings, ...legibilityWarnings(scene)] };
 }
 
 function graphOf(mol: Molecule): Graph {
@@ -108,3 +119,4 @@ function withHalo(theme: Theme): Theme {
   const stroke = theme.background === 'none' ? '#ffffff' : theme.background;
   return { ...theme, roles: { ...theme.roles, 'bond-halo': { stroke, strokeWidth: 3 * width, strokeLinecap: 'butt' } } };
 }
+
