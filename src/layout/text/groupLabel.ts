@@ -58,9 +58,9 @@ export function groupLabel(mol: Pick<Molecule, 'atoms'>, graph: Graph, atom: num
   if (e === 'H') return same('H');
   const rings = context.rings ?? [];
   if (rings.some((r) => r.includes(atom) && r.includes(from))) {
+    // a locant is written on the line (C3, O5, C4a): a subscript would read as an atom count
     const name = context.names?.get(atom) ?? e;
-    const m = /^([A-Z][a-z]?)(.*)$/.exec(name);
-    return same(m && m[2] ? `${m[1]}_{${m[2]}}` : name, name);
+    return { forward: [{ text: name }], reversed: [{ text: name }], anchor: name };
   }
   const k = kids(atom, from);
   const isMethyl = (a: number, p: number) => el(a) === 'C' && kids(a, p).length === 0 && hs(a) === 3;
