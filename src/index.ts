@@ -179,7 +179,9 @@ export { ringViewFrame, projectPoint, shoelaceArea, checkElevation } from './lay
 export type { RingViewFrame, ViewPoint } from './layout/ring/ringView.js';
 export { toPlacementJson, DEFAULT_ELEVATION_DEG } from './layout/ring/ringPlacement.js';
 export type { RingPlacement, PlacedBond, PlacementJson, RingView, RingHydrogens } from './layout/ring/ringPlacement.js';
-export { chairTemplate, assertChair, ringName, TEMPLATE_ELEVATION_DEG } from './layout/ring/chairTemplate.js';
+export { chairTemplate, assertChair, ringName, TEMPLATE_BOND_FRACTION } from './layout/ring/chairTemplate.js';
+export { chairOutline, type ChairOutlineKind } from './layout/ring/chairOutline.js';
+export { ringHydrogenMode, type RingHydrogenMode } from './layout/ring/ringHydrogens.js';
 export type { ChairTemplateOptions } from './layout/ring/chairTemplate.js';
 export { ringProjection } from './layout/ring/ringProjection.js';
 export type { RingProjectionOptions } from './layout/ring/ringProjection.js';

@@ -29,9 +29,9 @@ export interface ChairFigureOptions {
   readonly ordered?: boolean;
   /** `template` (trade chair, chairs only) or `projected` (true view, any ring). Default: template for chairs, else projected. */
   readonly view?: RingView;
-  /** Viewer elevation above the ring's mean plane, degrees. Default 20. */
+  /** Viewer elevation above the ring's mean plane, degrees (projected view only; giving it picks that view). Default 20. */
   readonly elevationDeg?: number;
-  /** Draw hydrogens on ring atoms. Default `show`. */
+  /** Ring hydrogens drawn: `all`, `stereo` (only where they show a configuration) or `none`. Default `stereo`. */
   readonly hydrogens?: RingHydrogens;
   /** Label text: `element` (condensed groups and ring locants), `id` (element + number) or `name`. Default `element`. */
   readonly labels?: RingLabels;
@@ -81,9 +81,13 @@ export function chairFigure(mol: Molecule, options: ChairFigureOptions = {}): Ch
     ...(chemical ? { locants: chemical.locants, numberingRule: chemical.rule } : {}),
   });
   // 2. View and placement.
-  const view = options.view ?? (ring.shape === 'chair' ? 'template' : 'projected');
-  const placeOptions = { elevationDeg: options.elevationDeg, hydrogens: options.hydrogens };
-  const placement = view === 'template' ? chairTemplate(ring, mol, placeOptions) : ringProjection(ring, mol, placeOptions);
+  const view = options.view ?? (ring.shape === 'chair' && options.elevationDeg === undefined ? 'template' : 'projected');
+  if (view === 'template' && options.elevationDeg !== undefined) {
+    throw usageError('bad-option', 'the chair template is a fixed outline: an elevation applies to the projected view only');
+  }
+  const placement = view === 'template'
+    ? chairTemplate(ring, mol, { hydrogens: options.hydrogens })
+    : ringProjection(ring, mol, { elevationDeg: options.elevationDeg, hydrogens: options.hydrogens });
   // 3. Layout and rendering with the theme (a background-coloured halo role added when the theme has none).
   const theme = withHalo(loadTheme(options.theme));
   const scene = layoutRing(placement, ring, mol, graph, { labels: options.labels, caption: options.caption, metrics: sceneMetrics(theme), measure: measureText, names: numbering.names, rings });

@@ -10,7 +10,8 @@ import {
   toReportRing,
   writeAtomic,
   writeFigure,
-  type RingHydrogens,
+  ringHydrogenMode,
+  usageError,
   type RingLabels,
   type RingView,
   jsonText,
@@ -40,8 +41,8 @@ export function registerChair(program: Command): void {
     .option('--ring <R>', 'ring number as inspect lists it, or an ordered atom list such as 1-2-3-4-5-6 or O5-C1-C2-C3-C4-C5 (default: the first six-ring, else the first ring)')
     .option('--record <n>', 'record (frame) to draw, counted from 1 (default 1)')
     .option('--view <mode>', 'template (trade chair; chairs only) or projected (true view of any ring) (default: template for chairs, else projected)')
-    .option('--elevation <deg>', 'viewer elevation above the ring plane in degrees, -90 to 90 (default 26 for template, 20 for projected)')
-    .option('--hydrogens <mode>', 'show or hide the hydrogens on ring atoms (default show)')
+    .option('--elevation <deg>', 'viewer elevation above the ring plane in degrees, -90 to 90, for the projected view (giving it picks that view) (default 20)')
+    .option('--hydrogens <mode>', 'ring hydrogens drawn: all, stereo (only an H that shows a configuration: at a ring atom with one heavy substituent) or none (default stereo)')
     .option('--labels <mode>', 'element (groups such as OH, CH₂OH, and ring locants), id (element + number) or name (atom names from the file) (default element)')
     .option('--no-caption', 'leave out the caption (shape, descriptor, Q/θ/φ)')
     .option('--theme <name|path>', 'column (print), projector (slides), contrast (colour-blind-safe), or a theme .json file (default column)')
@@ -59,7 +60,7 @@ export function registerChair(program: Command): void {
         graph, rings, ring, ordered,
         view: flags.view === undefined ? undefined : oneOf<RingView>('--view', flags.view, ['template', 'projected'], 'template'),
         elevationDeg: flags.elevation === undefined ? undefined : finiteNumber('--elevation', flags.elevation, -90, 90),
-        hydrogens: oneOf<RingHydrogens>('--hydrogens', flags.hydrogens, ['show', 'hide'], 'show'),
+        hydrogens: hydrogensFlag(flags.hydrogens),
         labels: oneOf<RingLabels>('--labels', flags.labels, ['element', 'id', 'name'], 'element'),
         caption: flags.caption !== false,
         theme: flags.theme,
@@ -76,4 +77,11 @@ export function registerChair(program: Command): void {
       if (flags.output) await writeFigure(flags.output, figure.svg);
       else process.stdout.write(`${figure.svg}\n`);
     });
+}
+
+/** `--hydrogens all|stereo|none` (the earlier `show` and `hide` still read as `all` and `none`). */
+function hydrogensFlag(word: string | undefined) {
+  const mode = ringHydrogenMode(word);
+  if (!mode) throw usageError('bad-option', `--hydrogens expects one of all, stereo, none, got "${word}"`);
+  return mode;
 }

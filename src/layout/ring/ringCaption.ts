@@ -62,11 +62,11 @@ export function ringTitle(ring: RingAnalysis, view: RingView): string {
 }
 
 /** The `<desc>` of a ring figure: view, numbers, and every substituent's position and face. */
-export function ringDescription(ring: RingAnalysis, view: RingView, elevationDeg: number, element: (atom: number) => string): string {
+export function ringDescription(ring: RingAnalysis, view: RingView, elevationDeg: number | null, element: (atom: number) => string, viewNote = ''): string {
   const how =
     view === 'template'
-      ? `Trade chair template placed from the measured Cremer–Pople displacements and substituent positions, viewed at ${elevationDeg}° elevation.`
-      : `Orthographic view of the measured coordinates in the ring frame (normal toward the viewer side, ${elevationDeg}° elevation).`;
+      ? `Stylised chair outline placed from the measured Cremer–Pople displacements and substituent positions.`
+      : `Orthographic view of the measured coordinates in the ring frame (normal toward the viewer side, ${elevationDeg ?? 0}° elevation${viewNote}).`;
   const pk = ring.puckering;
   const numbers = `Q ${numberText(pk.Q, 3)} Å, θ ${numberText(pk.thetaDeg, 1)}, φ ${numberText(pk.phiDeg, 1)}.`;
   const subs = ring.substituents

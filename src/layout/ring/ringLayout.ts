@@ -92,7 +92,9 @@ export function layoutRing(placement: RingPlacement, ring: RingAnalysis, mol: Mo
   }).flatMap((d) => (d.line.role !== 'ring-bond' && isTerminalDouble(mol, graph, d.line.atoms![0]!, d.line.atoms![1]!) ? doubled(d, metrics.lineWidth) : [d]));
   drawn.sort((a, b) => a.near - b.near || a.order - b.order);
   const items: SceneItem[] = [];
-  const halfGap = 1.6 * metrics.lineWidth + metrics.gap;
+  // half-length of a halo along the nearer bond: enough to cover the crossing (metrics.lineWidth counts the
+  // halo's own width, so it is not used here)
+  const halfGap = 1.5 * metrics.gap;
   drawn.forEach((d, i) => {
     for (const far of drawn.slice(0, i)) {
       if (far.line.atoms!.some((a) => d.line.atoms!.includes(a))) continue;
