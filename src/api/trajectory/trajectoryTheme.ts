@@ -29,6 +29,10 @@ export function withTrajectoryRoles(theme: Theme): Theme {
   for (let l = 1; l <= DENSITY_LEVELS; l++) {
     roles[`density-${l}`] = { fill: base, stroke: 'none', opacity: Math.round((0.1 + (0.9 * (l - 1)) / (DENSITY_LEVELS - 1)) * 100) / 100 };
   }
+  // time-series density: a single frame in a column must stay visible, so the lightest level is darker
+  for (let l = 1; l <= DENSITY_LEVELS; l++) {
+    roles[`trace-${l}`] = { fill: base, stroke: 'none', opacity: Math.round((0.45 + (0.55 * (l - 1)) / (DENSITY_LEVELS - 1)) * 100) / 100 };
+  }
   SHAPE_ORDER.forEach((shape, i) => {
     const fill = mono ? 'currentColor' : PALETTE[i]!;
     roles[`band-${shape}`] = { fill, stroke: 'none', opacity: mono ? SHADES[i]! : 0.3 };
@@ -43,5 +47,7 @@ export function withTrajectoryRoles(theme: Theme): Theme {
   roles['form-label'] = { fill: ink, fontSize: Math.round(tick * 0.9 * 100) / 100 };
   roles['panel-title'] = { fill: ink, fontSize: tick };
   roles.series = { stroke: base, fill: 'none', strokeWidth: line * 1.2 };
+  roles['series-point'] = { fill: base, stroke: 'none' };
+  roles['series-muted'] = { fill: mono ? 'currentColor' : '#c4c4c4', stroke: 'none', opacity: mono ? 0.22 : 1 };
   return { ...theme, roles: { ...roles, ...theme.roles } };
 }
