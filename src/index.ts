@@ -121,7 +121,7 @@ export { approximateMeasure, textStyle, DEFAULT_METRICS } from './layout/scene.j
 export type { Scene, SceneItem, SceneLine, ScenePath, SceneCircle, SceneText, SceneMetrics, TextMeasure, TextStyle, FontWeight } from './layout/scene.js';
 export { renderSvg } from './render/renderSvg.js';
 export type { RenderSvgOptions } from './render/renderSvg.js';
-export { renderPng } from './render/renderPng.js';
+export { renderPng, pngResolution, DEFAULT_DPI } from './render/renderPng.js';
 export type { RenderPngOptions } from './render/renderPng.js';
 export { renderPdf, svgSizePt } from './render/renderPdf.js';
 export { measureText } from './render/svgWindow.js';

@@ -22,6 +22,8 @@ export interface TrajectoryFigureOptions {
   readonly formats: readonly FigureFormat[];
   readonly theme?: Theme | string;
   readonly timestep: Timestep | null;
+  /** PNG resolution, dots per inch. Default 300. */
+  readonly dpi?: number;
 }
 
 const angle = (label: string, max: number, step: number, wraps: boolean, extra: Partial<SeriesSpec> = {}): SeriesSpec => ({
@@ -72,7 +74,7 @@ export async function writeTrajectoryFiles(
   }
   for (const [name, svg] of figures) {
     for (const format of options.formats) {
-      await writeFigure(join(dir, `${name}.${format}`), svg, { format });
+      await writeFigure(join(dir, `${name}.${format}`), svg, { format, dpi: options.dpi });
       files.push(`${name}.${format}`);
     }
   }
