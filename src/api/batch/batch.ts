@@ -33,6 +33,8 @@ export interface BatchOptions {
   readonly bonds?: BondSet | string;
   /** Figure formats, each figure and sheet written in every one. Default `['svg']`. */
   readonly formats?: readonly FigureFormat[];
+  /** PNG resolution, dots per inch. Default 300. */
+  readonly dpi?: number;
   /** Theme object, built-in name or path. Default `column`. */
   readonly theme?: Theme | string;
   /** Prefix before every figure's own id prefix (`<prefix>r01-newman-3-4-`). Default none. */
@@ -163,7 +165,7 @@ export async function batchFile(path: string, dir: string, options: BatchOptions
   const threads = total > (options.workerThreshold ?? 40) ? (options.jobs ?? Math.min(4, availableParallelism())) : 1;
   let done = 0;
   options.onProgress?.(0, total);
-  const drawn = await drawTasks(tasks, { theme, formats: formats.filter((f) => f !== 'svg') }, threads, (n) => {
+  const drawn = await drawTasks(tasks, { theme, formats: formats.filter((f) => f !== 'svg'), dpi: options.dpi }, threads, (n) => {
     done += n;
     options.onProgress?.(done, total);
   });
@@ -190,7 +192,7 @@ export async function batchFile(path: string, dir: string, options: BatchOptions
       });
       for (const format of formats) {
         const file = `sheet-${s + 1}.${format}`;
-        writeAtomic(join(dir, file), await figureBytes(svg, format));
+        writeAtomic(join(dir, file), await figureBytes(svg, format, { dpi: options.dpi }));
         figures.push({ record: null, kind: 'sheet', bond: null, ring: null, path: file });
       }
     }

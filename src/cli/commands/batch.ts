@@ -11,13 +11,14 @@ import {
   type FigureFormat,
   type TableFormat,
 } from '../../index.js';
-import { limitsOf, oneOf, printWarnings, wholeNumber } from '../options.js';
+import { limitsOf, oneOf, printWarnings, wholeNumber, DPI_HELP, dpiOption } from '../options.js';
 
 interface BatchFlags {
   dir: string;
   bonds?: string;
   formats?: string;
   theme?: string;
+  dpi?: string;
   idPrefix?: string;
   sheet?: boolean;
   tables?: string;
@@ -40,6 +41,7 @@ export function registerBatch(program: Command): void {
     .requiredOption('-d, --dir <dir>', 'output folder (created if needed)')
     .option('--bonds <set>', `bonds drawn as Newman projections: ${[...BOND_SETS.keys()].join(', ')}, or a list such as 1-2,3-4 (default ring)`)
     .option('--formats <list>', `figure formats, comma-separated: ${[...FIGURE_FORMATS.keys()].join(', ')} (default svg)`)
+    .option('--dpi <n>', DPI_HELP)
     .option('--theme <name|path>', 'column (print), projector (slides), contrast (colour-blind-safe), or a theme .json file (default column)')
     .option('--id-prefix <p>', 'put before every figure\'s own id prefix, to keep figures of several batches apart on one page')
     .option('--no-sheet', 'write no contact sheet')
@@ -56,7 +58,7 @@ export function registerBatch(program: Command): void {
       const bar = process.stderr.isTTY ? new cliProgress.SingleBar({ format: 'figures {bar} {value}/{total}', stream: process.stderr }, cliProgress.Presets.shades_classic) : null;
       let started = false;
       const result = await batchFile(file, flags.dir, {
-        bonds: flags.bonds, formats, tables, jobs, theme: flags.theme, idPrefix: flags.idPrefix, sheet: flags.sheet !== false,
+        bonds: flags.bonds, formats, tables, jobs, theme: flags.theme, dpi: dpiOption(flags.dpi), idPrefix: flags.idPrefix, sheet: flags.sheet !== false,
         energy: { field: flags.energyField, unit: flags.energyUnit },
         read, hold,
         onProgress: bar

@@ -16,7 +16,7 @@ import {
   type RingView,
   jsonText,
 } from '../../index.js';
-import { finiteNumber, limitsOf, oneOf, printWarnings, wholeNumber } from '../options.js';
+import { finiteNumber, limitsOf, oneOf, printWarnings, wholeNumber, DPI_HELP, dpiOption } from '../options.js';
 
 interface ChairFlags {
   ring?: string;
@@ -30,6 +30,7 @@ interface ChairFlags {
   idPrefix?: string;
   json?: boolean;
   output?: string;
+  dpi?: string;
 }
 
 /** Adds the `chair` command to the program. */
@@ -48,6 +49,7 @@ export function registerChair(program: Command): void {
     .option('--theme <name|path>', 'column (print), projector (slides), contrast (colour-blind-safe), or a theme .json file (default column)')
     .option('--id-prefix <p>', 'prefix for ids inside the SVG, to keep several figures on one page apart (default chair-)')
     .option('--json', 'print the ring analysis and the 2D placement (conformark/chair@1) instead of a figure')
+    .option('--dpi <n>', DPI_HELP)
     .option('-o, --output <file>', 'write to FILE (.svg, .png or .pdf; .json with --json) instead of standard output')
     .action(async (file: string, flags: ChairFlags, command: Command) => {
       const { read } = limitsOf(command);
@@ -74,7 +76,7 @@ export function registerChair(program: Command): void {
         else process.stdout.write(text);
         return;
       }
-      if (flags.output) await writeFigure(flags.output, figure.svg);
+      if (flags.output) await writeFigure(flags.output, figure.svg, { dpi: dpiOption(flags.dpi) });
       else process.stdout.write(`${figure.svg}\n`);
     });
 }

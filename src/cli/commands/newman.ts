@@ -23,7 +23,7 @@ import {
   type NewmanLabels,
   jsonText,
 } from '../../index.js';
-import { limitsOf, oneOf, printWarnings, wholeNumber } from '../options.js';
+import { limitsOf, oneOf, printWarnings, wholeNumber, DPI_HELP, dpiOption } from '../options.js';
 
 interface NewmanFlags {
   bond: string;
@@ -40,6 +40,7 @@ interface NewmanFlags {
   couplings?: boolean;
   karplus?: string;
   output?: string;
+  dpi?: string;
 }
 
 /** Adds the `newman` command to the program. */
@@ -61,6 +62,7 @@ export function registerNewman(program: Command): void {
     .option('--couplings', 'print predicted ³J(H,H) for each H/H pair (estimates; Haasnoot–de Leeuw–Altona 1980 by default)')
     .option('--karplus <form>', `coupling equation: ${COUPLING_METHODS.join(', ')} (implies --couplings)`)
     .option('--json', 'print the analysis (conformark/newman@1) instead of a figure')
+    .option('--dpi <n>', DPI_HELP)
     .option('-o, --output <file>', 'write to FILE (.svg, .png or .pdf; .json with --json) instead of standard output')
     .action(async (file: string, flags: NewmanFlags, command: Command) => {
       if (flags.output) protectInput(file);
@@ -91,7 +93,7 @@ export function registerNewman(program: Command): void {
         idPrefix: flags.idPrefix,
       });
       printWarnings(warnings);
-      if (flags.output) await writeFigure(flags.output, svg);
+      if (flags.output) await writeFigure(flags.output, svg, { dpi: dpiOption(flags.dpi) });
       else process.stdout.write(`${svg}\n`);
     });
 }
