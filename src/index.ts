@@ -75,8 +75,8 @@ export type { DuplicateOptions } from './analysis/duplicates.js';
 export { torsionFingerprint, compareTorsionFingerprints } from './analysis/torsionFingerprint.js';
 export type { FingerprintDifference, TorsionAtoms } from './analysis/torsionFingerprint.js';
 // rings (area C): ring reference order, canonical forms, shape and descriptor, substituents, pseudorotation
-export { altonaSundaralingam, fourierPseudorotation } from './geometry/pseudorotation.js';
-export type { Pseudorotation } from './geometry/pseudorotation.js';
+export { altonaSundaralingam, altonaSundaralingamFit, fourierPseudorotation, leastSquaresAmplitude } from './geometry/pseudorotation.js';
+export type { AltonaSundaralingamFit, AmplitudeMethod, Pseudorotation } from './geometry/pseudorotation.js';
 export { ringReference } from './analysis/ringReference.js';
 export type { RingReference, RingReferenceOptions } from './analysis/ringReference.js';
 export {

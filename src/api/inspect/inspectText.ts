@@ -49,6 +49,14 @@ function recordText(record: RecordReport): string {
   return lines.join('\n');
 }
 
+/** How τm was found, in the text report. */
+const TAU_METHOD_WORDS = {
+  'closed-form': 'closed form',
+  'least-squares': 'least-squares fit',
+  blended: 'closed form blended with fit',
+  fourier: 'Fourier form',
+} as const;
+
 function ringText(record: RecordReport, ring: ReportRing): string[] {
   const p = ring.puckering;
   const shape = [ring.shape, ring.descriptor ?? ''].filter(Boolean).join(' ');
@@ -56,7 +64,8 @@ function ringText(record: RecordReport, ring: ReportRing): string[] {
   if (ring.size === 6) numbers.push(`θ ${fixed(p.thetaDeg, 1, '°')}`);
   numbers.push(`φ ${fixed(p.phiDeg, 1, '°')}`);
   if (ring.pseudorotation) {
-    numbers.push(`P ${ring.pseudorotation.phaseDeg.toFixed(1)}°`, `τm ${ring.pseudorotation.amplitudeDeg.toFixed(1)}°`);
+    const pr = ring.pseudorotation;
+    numbers.push(`P ${pr.phaseDeg.toFixed(1)}°`, `τm ${pr.amplitudeDeg.toFixed(1)}° (${TAU_METHOD_WORDS[pr.method]})`);
   }
   const out = [
     `  ring ${ring.id ?? '?'} (${ring.size} atoms): ${ring.atoms.map((a) => atomLabel(record, a)).join('-')}`,
