@@ -30,7 +30,8 @@ export interface RecordReportOptions {
 export interface RecordReport {
   index: number;
   title: string;
-  energy: { value: number; unit: string; field: string } | null;
+  /** The energy as found; `unit` null when nothing says it (`unitFrom` tells how it was known). */
+  energy: { value: number; unit: string | null; unitFrom: string | null; field: string } | null;
   atoms: { id: number; element: string; name: string | null; xyz: [number, number, number] }[];
   bonds: { atoms: [number, number]; order: number; perceived: boolean }[];
   rings: ReportRing[];

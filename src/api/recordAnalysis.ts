@@ -5,7 +5,7 @@
 import type { Molecule } from '../model/molecule.js';
 import type { Warning } from '../model/errors.js';
 import { findEnergy, type EnergyOptions } from '../io/energy.js';
-import { toKcalPerMol } from '../model/energyUnits.js';
+import { toKcalPerMol, type EnergyUnit } from '../model/energyUnits.js';
 import { bondListSelection } from '../perceive/bondSelection.js';
 import { analyzeRing, type RingAnalysis } from '../analysis/ringAnalysis.js';
 import { newmanView, type NewmanView } from '../analysis/newman.js';
@@ -28,8 +28,10 @@ export interface RecordAnalysis {
   /** Record number in the file, from 1. */
   readonly record: number;
   readonly title: string;
-  /** Energy converted to kcal/mol, with the field it came from; `null` when the record has none. */
-  readonly energy: { readonly kcal: number; readonly field: string } | null;
+  /** Energy converted to kcal/mol, with the field it came from and its unit; `null` when the record has none. */
+  readonly energy: { readonly kcal: number; readonly field: string; readonly unit: EnergyUnit } | null;
+  /** Field of an energy whose unit is unknown (it is then not in `energy`), else `null`. */
+  readonly energyWithoutUnit: string | null;
   readonly rings: readonly RingAnalysis[];
   /** Drawn bonds with their Newman views, in drawing order. */
   readonly bonds: readonly { readonly bond: readonly [number, number]; readonly view: NewmanView }[];
@@ -56,11 +58,11 @@ export function analyseRecord(prepared: PreparedRecord, options: RecordAnalysisO
   );
   const found_ = findEnergy(mol, options.energy);
   const warnings: Warning[] = [...rings.flatMap((r) => r.warnings), ...bonds.flatMap((b) => b.view.warnings)];
-  if (found_?.warning) warnings.push(found_.warning);
   return {
     record: mol.source.index,
     title: mol.title,
-    energy: found_ ? { kcal: toKcalPerMol(found_.value, found_.unit), field: found_.field } : null,
+    energy: found_?.unit ? { kcal: toKcalPerMol(found_.value, found_.unit), field: found_.field, unit: found_.unit } : null,
+    energyWithoutUnit: found_ && found_.unit === null ? found_.field : null,
     rings,
     bonds,
     couplings,

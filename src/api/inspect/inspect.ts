@@ -42,7 +42,7 @@ export function inspectMolecule(mol: Molecule, options: InspectOptions = {}): Re
   if (energy?.warning) warnings.push(energy.warning);
   return {
     ...report,
-    energy: energy ? { value: energy.value, unit: energy.unit, field: energy.field } : null,
+    energy: energy ? { value: energy.value, unit: energy.unit, unitFrom: energy.unitFrom, field: energy.field } : null,
     warnings,
   };
 }

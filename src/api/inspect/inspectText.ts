@@ -32,7 +32,7 @@ function recordText(record: RecordReport): string {
     `${record.bonds.length} bonds ${perceived ? 'perceived from coordinates' : 'from the file'}`,
     `${nr} ring${nr === 1 ? '' : 's'}`,
   ];
-  if (record.energy) facts.push(`energy ${record.energy.value} ${record.energy.unit} (${record.energy.field})`);
+  if (record.energy) facts.push(`energy ${record.energy.value} ${record.energy.unit ?? '(unit unknown)'} (${record.energy.field})`);
   // titles come from files: no terminal control sequences, bounded length
   const title = safeText(record.title).text;
   const lines = [`record ${record.index}${title ? `  "${title}"` : ''}`, `  ${facts.join(' · ')}`];
