@@ -143,8 +143,10 @@ export type { RingSystem } from './perceive/ringSystems.js';
 export { atomIndex } from './perceive/atomIndex.js';
 export { bondSelection, bondListSelection } from './perceive/bondSelection.js';
 export { ringSelection } from './perceive/ringSelection.js';
+export { isTrigonalAtom, isTrigonalRing, trigonalAtoms } from './perceive/trigonalAtoms.js';
 // shared record preparation (integrator)
 export { prepareRecord, readRecord } from './api/prepare.js';
+export { FLAT_INPUT_WARNING, isTwoDimensional } from './api/flatInput.js';
 export type { PreparedRecord } from './api/prepare.js';
 // inspect (integrator)
 export { inspectFile, inspectMolecule } from './api/inspect/inspect.js';
@@ -188,7 +190,7 @@ export { chairFigure } from './api/figures/chair.js';
 export type { ChairFigure, ChairFigureOptions } from './api/figures/chair.js';
 // batch + ensemble (area H)
 export { BOND_SETS, figureBonds, ringBonds } from './analysis/figureBonds.js';
-export type { BondSet } from './analysis/figureBonds.js';
+export type { BondSet, FigureBondOptions } from './analysis/figureBonds.js';
 export { layoutContactSheet, panelLetter } from './layout/sheets/contactSheet.js';
 export type { SheetPanel, ContactSheetOptions, PanelPlacement } from './layout/sheets/contactSheet.js';
 export { layoutEnergyLadder, percentText } from './layout/plots/energyLadder.js';

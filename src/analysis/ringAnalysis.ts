@@ -9,6 +9,7 @@ import { cremerPople, meanPlane, PHASE_THRESHOLD, type Puckering } from '../geom
 import { altonaSundaralingamFit, fourierPseudorotation, type AmplitudeMethod } from '../geometry/pseudorotation.js';
 import { torsion } from '../geometry/torsion.js';
 import type { Graph } from '../perceive/graph.js';
+import { isTrigonalRing } from '../perceive/trigonalAtoms.js';
 import { ringReference } from './ringReference.js';
 import { classifyRing, type FormFit, type RingShapeOptions } from './ringShape.js';
 import { chosenPlane, type DescriptorParts } from './ringDescriptor.js';
@@ -114,7 +115,8 @@ export function analyzeRing(
   const cls = classifyRing(pk, ref.locants, options);
   const warnings: Warning[] = [];
   const planar = cls.shape === 'planar';
-  if (planar && n > 3) {
+  // an aromatic or other sp²-only ring is meant to be flat: only a ring that should pucker gets the warning
+  if (planar && n > 3 && !isTrigonalRing(mol, graph, atoms)) {
     warnings.push({
       code: 'ring-nearly-planar',
       message: `ring ${label} is nearly planar (Q ${pk.Q.toFixed(3)} Å): phase and ring form are undefined`,

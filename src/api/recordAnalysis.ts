@@ -17,6 +17,8 @@ import type { PreparedRecord } from './prepare.js';
 export interface RecordAnalysisOptions {
   /** Bonds to draw: a named set or a list such as `1-2,3-4` (1-based numbers or atom names). Default `ring`. */
   readonly bonds?: BondSet | string;
+  /** Also draw ring bonds between two sp² (trigonal, aromatic) atoms with the named sets. Default false. */
+  readonly sp2Bonds?: boolean;
   /** Coupling equation (default Haasnoot–de Leeuw–Altona 1980). */
   readonly coupling?: CouplingOptions;
   /** Energy field and unit (default: the first field whose name contains "energy"). */
@@ -49,7 +51,7 @@ export function analyseRecord(prepared: PreparedRecord, options: RecordAnalysisO
   const rings = found.map((ring, i) => analyzeRing(mol, graph, ring, { id: i + 1 }));
   const ordered = rings.map((r) => r.atoms);
   const which = options.bonds ?? 'ring';
-  const pairs = BOND_SETS.has(which as BondSet) ? figureBonds(mol, graph, ordered, which as BondSet) : bondListSelection(mol, graph, which);
+  const pairs = BOND_SETS.has(which as BondSet) ? figureBonds(mol, graph, ordered, which as BondSet, { trigonal: options.sp2Bonds ?? false }) : bondListSelection(mol, graph, which);
   const bonds = pairs.map((bond) => ({ bond, view: newmanView(mol, graph, bond[0], bond[1], { rings: ordered }) }));
   const couplings = rings.flatMap((r) =>
     ringCouplings(mol, graph, r.atoms, options.coupling)

@@ -16,6 +16,7 @@ import { energySpreadWarning, unitRequest, type EnergyOptions } from '../../io/e
 import type { Theme } from '../../render/theme.js';
 import { loadTheme } from '../../render/themes.js';
 import { prepareRecord } from '../prepare.js';
+import { withFlatInputWarning } from '../flatInput.js';
 import { analyseRecord, recordLabel, type RecordAnalysis } from '../recordAnalysis.js';
 import { goodRecords, type RecordError } from '../recordStream.js';
 import { canDraw, type FigureKind } from '../figures/figureKinds.js';
@@ -31,6 +32,8 @@ import { previousOutputs, removeStale } from './staleOutputs.js';
 export interface BatchOptions {
   /** Bonds drawn as Newman projections: `ring` (default), `rotatable`, `all`, or a list `1-2,3-4`. */
   readonly bonds?: BondSet | string;
+  /** Also draw ring bonds between two sp² atoms (inside aromatic rings) with `ring`/`all`. Default false. */
+  readonly sp2Bonds?: boolean;
   /** Figure formats, each figure and sheet written in every one. Default `['svg']`. */
   readonly formats?: readonly FigureFormat[];
   /** Theme object, built-in name or path. Default `column`. */
@@ -132,14 +135,15 @@ export async function batchFile(path: string, dir: string, options: BatchOptions
   // 1. Read and analyse every record; a bad one becomes an error entry and the batch goes on.
   const analysed: { molecule: Molecule; analysis: RecordAnalysis }[] = [];
   let refusal: ConformarkError | null = null;
+  const flat = { warned: false };
   for await (const mol of goodRecords(path, options, errors)) {
     try {
       const prepared = prepareRecord(mol);
-      const analysis = analyseRecord(prepared, { bonds: options.bonds, coupling: options.coupling, energy: options.energy });
+      const analysis = analyseRecord(prepared, { bonds: options.bonds, sp2Bonds: options.sp2Bonds, coupling: options.coupling, energy: options.energy });
       // captions and tables need a unit: refuse rather than guess (thrown past the per-record catch below)
       if (analysis.energyWithoutUnit !== null) refusal = usageError('energy-unit-unknown', `record ${analysis.record}: ${unitRequest(analysis.energyWithoutUnit)}`, path);
       analysed.push({ molecule: prepared.molecule, analysis });
-      for (const warning of analysis.warnings) warnings.push({ record: analysis.record, warning });
+      for (const warning of withFlatInputWarning(mol, analysis.warnings, flat)) warnings.push({ record: analysis.record, warning });
     } catch (err) {
       if (!(err instanceof ConformarkError)) throw err;
       for (const i of err.issues) {

@@ -18,6 +18,7 @@ import { findDuplicates } from '../../analysis/duplicates.js';
 import { analyzeRing } from '../../analysis/ringAnalysis.js';
 import { isSkippedCoupling, ringCouplings, type Coupling, type CouplingMethod, type CouplingOptions } from '../../analysis/coupling.js';
 import { prepareRecord, type PreparedRecord } from '../prepare.js';
+import { withFlatInputWarning } from '../flatInput.js';
 import { goodRecords, type RecordError } from '../recordStream.js';
 
 /** Options of {@link ensembleFile} / {@link ensembleOf}. */
@@ -110,6 +111,8 @@ export function ensembleOf(molecules: readonly Molecule[], options: EnsembleOpti
   });
   rows.sort((a, b) => a.energy - b.energy || a.mol.source.index - b.mol.source.index);
   if (rows.length === 0) throw usageError('no-records', 'no records with energies to rank');
+  const flat = { warned: false };
+  for (const r of rows) for (const warning of withFlatInputWarning(r.mol, [], flat)) warnings.push({ record: r.mol.source.index, warning });
   const spread = energySpreadWarning(rows.map((r) => r.energy), [...new Set(rows.map((r) => r.unit))].join(', '));
   if (spread) warnings.push({ record: rows[rows.length - 1]!.mol.source.index, warning: spread });
   // 2. Duplicates among records with the same atoms in the same order.
