@@ -1,6 +1,6 @@
 /** One call from a molecule to a themed ring figure: pick the ring, analyse it, place it, lay it out, render. */
 import type { Molecule } from '../../model/molecule.js';
-import { usageError, type Warning } from '../../model/errors.js';
+import { ConformarkError, usageError, type Warning } from '../../model/errors.js';
 import { buildGraph, type Graph } from '../../perceive/graph.js';
 import { withBonds } from '../../perceive/withBonds.js';
 import { findRings } from '../../perceive/findRings.js';
@@ -72,12 +72,22 @@ export function chairFigure(mol: Molecule, options: ChairFigureOptions = {}): Ch
   // 2. View and placement.
   const view = options.view ?? (ring.shape === 'chair' ? 'template' : 'projected');
   const placeOptions = { elevationDeg: options.elevationDeg, hydrogens: options.hydrogens };
-  const placement = view === 'template' ? chairTemplate(ring, mol, placeOptions) : ringProjection(ring, mol, placeOptions);
+  const placement = view === 'template' ? inFile(mol, () => chairTemplate(ring, mol, placeOptions)) : ringProjection(ring, mol, placeOptions);
   // 3. Layout and rendering with the theme (a background-coloured halo role added when the theme has none).
   const theme = withHalo(loadTheme(options.theme));
   const scene = layoutRing(placement, ring, mol, graph, { labels: options.labels, caption: options.caption, metrics: sceneMetrics(theme), measure: measureText });
   const svg = renderSvg(scene, theme, { idPrefix: options.idPrefix ?? 'chair-' });
   return { svg, ring, scene, view, placement, warnings: ring.warnings };
+}
+
+/** Runs `f`; a user error without a file (the layout's chair refusal) gets the record's file and line. */
+function inFile<T>(mol: Molecule, f: () => T): T {
+  try {
+    return f();
+  } catch (err) {
+    if (!(err instanceof ConformarkError) || err.issues.some((i) => i.file)) throw err;
+    throw new ConformarkError(err.issues.map((i) => ({ ...i, file: mol.source.file, line: i.line ?? mol.source.line })));
+  }
 }
 
 function graphOf(mol: Molecule): Graph {
