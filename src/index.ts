@@ -44,6 +44,7 @@ export {
   COUPLING_METHOD_SHORT_NAMES,
   couplingsAcrossBond,
   isSkippedCoupling,
+  noHydrogenWarning,
   ringCouplings,
   toCouplingJson,
   vicinalCoupling,

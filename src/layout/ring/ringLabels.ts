@@ -20,15 +20,17 @@ function withHydrogens(mol: Pick<Molecule, 'atoms'>, graph: Graph, atom: number)
 /**
  * Condensed text of the group that starts at `atom` (bonded to ring atom `from`): the atom with its hydrogens,
  * followed by each further heavy neighbour that carries nothing but hydrogens (`CH₂OH`, `OCH₃`, `COOH` is `CO` +
- * `OH`…); deeper groups are left at their first atom.
+ * `OH`…); deeper groups are left at their first atom. In a file without hydrogens the parts are joined by a bond
+ * dash (`C–O`), since `CO` would read as a carbonyl.
  */
 export function groupText(mol: Pick<Molecule, 'atoms'>, graph: Graph, atom: number, from: number): string {
   let text = withHydrogens(mol, graph, atom);
   if (mol.atoms[atom]!.element === 'H') return text;
+  const join = mol.atoms.some((a) => a.element === 'H') ? '' : '–';
   for (const b of graph.neighbors[atom]!) {
     if (b === from || mol.atoms[b]!.element === 'H') continue;
     const heavy = graph.neighbors[b]!.filter((c) => c !== atom && mol.atoms[c]!.element !== 'H');
-    if (heavy.length === 0) text += withHydrogens(mol, graph, b);
+    if (heavy.length === 0) text += join + withHydrogens(mol, graph, b);
   }
   return text;
 }
