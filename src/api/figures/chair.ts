@@ -70,7 +70,7 @@ export function chairFigure(mol: Molecule, options: ChairFigureOptions = {}): Ch
   const { atoms, id } = pickRing(mol, rings, options.ring);
   const ring = analyzeRing(mol, graph, atoms, { ...options.analysis, ...(id === undefined ? {} : { id }), ordered: options.ordered ?? false });
   // 2. View and placement.
-  const view = options.view ?? (ring.shape === 'chair' ? 'template' : 'projected');
+  const view = options.view ?? (ring.shape === 'chair' && ring.size === 6 ? 'template' : 'projected');
   const placeOptions = { elevationDeg: options.elevationDeg, hydrogens: options.hydrogens };
   const placement = view === 'template' ? inFile(mol, () => chairTemplate(ring, mol, placeOptions)) : ringProjection(ring, mol, placeOptions);
   // 3. Layout and rendering with the theme (a background-coloured halo role added when the theme has none).
