@@ -44,6 +44,7 @@ export {
   COUPLING_METHOD_SHORT_NAMES,
   couplingsAcrossBond,
   isSkippedCoupling,
+  noHydrogenWarning,
   ringCouplings,
   toCouplingJson,
   vicinalCoupling,
@@ -75,8 +76,8 @@ export type { DuplicateOptions } from './analysis/duplicates.js';
 export { torsionFingerprint, compareTorsionFingerprints } from './analysis/torsionFingerprint.js';
 export type { FingerprintDifference, TorsionAtoms } from './analysis/torsionFingerprint.js';
 // rings (area C): ring reference order, canonical forms, shape and descriptor, substituents, pseudorotation
-export { altonaSundaralingam, fourierPseudorotation } from './geometry/pseudorotation.js';
-export type { Pseudorotation } from './geometry/pseudorotation.js';
+export { altonaSundaralingam, altonaSundaralingamFit, fourierPseudorotation, leastSquaresAmplitude } from './geometry/pseudorotation.js';
+export type { AltonaSundaralingamFit, AmplitudeMethod, Pseudorotation } from './geometry/pseudorotation.js';
 export { ringReference } from './analysis/ringReference.js';
 export type { RingReference, RingReferenceOptions } from './analysis/ringReference.js';
 export {
@@ -148,8 +149,10 @@ export type { RingSystem } from './perceive/ringSystems.js';
 export { atomIndex } from './perceive/atomIndex.js';
 export { bondSelection, bondListSelection } from './perceive/bondSelection.js';
 export { ringSelection } from './perceive/ringSelection.js';
+export { isTrigonalAtom, isTrigonalRing, trigonalAtoms } from './perceive/trigonalAtoms.js';
 // shared record preparation (integrator)
 export { prepareRecord, readRecord } from './api/prepare.js';
+export { FLAT_INPUT_WARNING, isTwoDimensional } from './api/flatInput.js';
 export type { PreparedRecord } from './api/prepare.js';
 // inspect (integrator)
 export { inspectFile, inspectMolecule } from './api/inspect/inspect.js';
@@ -169,8 +172,8 @@ export type { Settled } from './io/sink.js';
 export type { ReadOptions } from './io/limits.js';
 export { DEFAULT_LIMITS } from './io/limits.js';
 export { detectFormat, formatFromExtension } from './io/detectFormat.js';
-export { findEnergy, toKcalPerMol, normalizeEnergyUnit } from './io/energy.js';
-export type { Energy, EnergyOptions, FoundEnergy } from './io/energy.js';
+export { findEnergy, toKcalPerMol, normalizeEnergyUnit, energySpreadWarning, unitRequest, UNIT_SOURCE_WORDS } from './io/energy.js';
+export type { Energy, EnergyOptions, EnergyUnitSource, FoundEnergy } from './io/energy.js';
 export { formatXyz } from './io/formatXyz.js';
 export type { FormatXyzOptions } from './io/formatXyz.js';
 export { parseXyzComment } from './io/xyzComment.js';
@@ -198,7 +201,7 @@ export { chairFigure } from './api/figures/chair.js';
 export type { ChairFigure, ChairFigureOptions } from './api/figures/chair.js';
 // batch + ensemble (area H)
 export { BOND_SETS, figureBonds, ringBonds } from './analysis/figureBonds.js';
-export type { BondSet } from './analysis/figureBonds.js';
+export type { BondSet, FigureBondOptions } from './analysis/figureBonds.js';
 export { layoutContactSheet, panelLetter } from './layout/sheets/contactSheet.js';
 export type { SheetPanel, ContactSheetOptions, PanelPlacement } from './layout/sheets/contactSheet.js';
 export { layoutEnergyLadder, percentText } from './layout/plots/energyLadder.js';

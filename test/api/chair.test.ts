@@ -59,8 +59,9 @@ describe('chairFigure choices and errors', () => {
 
   it('refuses the template for a non-chair, pointing to the projected view', () => {
     expect(() => chairFigure(tb.mol, { rings: [tb.ring], view: 'template' })).toThrow(
-      /^ring 1 is a twist-boat \(\d,?\w*S\w+\), not a chair: use --view projected$/,
+      /^.+: ring 1 is a twist-boat \(\d,?\w*S\w+\), not a chair: use --view projected$/,
     );
+    expect(() => chairFigure(tb.mol, { rings: [tb.ring], view: 'template' })).toThrow(expect.objectContaining({ issues: [expect.objectContaining({ code: 'not-a-chair', file: tb.mol.source.file })] }));
   });
 
   it('fails with "no ring to draw in record N" for a record without rings', () => {

@@ -35,6 +35,7 @@ describe('conformark chair', () => {
     const bad = run('chair', sdf, '--record', '2', '--view', 'template');
     expect(bad.status).toBe(2);
     expect(bad.stderr).toMatch(/^conformark: .*ring 1 is a twist-boat \(.+\), not a chair: use --view projected\n$/);
+    expect(bad.stderr.startsWith(`conformark: ${sdf}:`)).toBe(true); // the refusal names the file
   });
 
   it('conformark chair --json prints the ring report and the 2D placement', () => {

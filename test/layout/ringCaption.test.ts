@@ -32,6 +32,13 @@ describe('groupText', () => {
     expect(groupText(mol, graph, 6, 0)).toBe('CH₃');
     expect(groupText(mol, graph, 4, 1)).toBe('OH');
   });
+
+  it('groupText of a hydrogen-free CH₂OH is C–O, not CO (which reads as a carbonyl)', () => {
+    const el = ['C', 'C', 'O'];
+    const bonds = [[0, 1], [1, 2]].map(([a, b]) => ({ a: a!, b: b!, order: 1, perceived: true }));
+    const mol = { atoms: el.map((element) => ({ element, name: null })) };
+    expect(groupText(mol, buildGraph(3, bonds), 1, 0)).toBe('C–O');
+  });
 });
 
 describe('groupLabel', () => {

@@ -1,6 +1,6 @@
 /** One call from a molecule to a themed ring figure: pick the ring, analyse it, place it, lay it out, render. */
 import type { Molecule } from '../../model/molecule.js';
-import { usageError, type Warning } from '../../model/errors.js';
+import { ConformarkError, usageError, type Warning } from '../../model/errors.js';
 import { buildGraph, type Graph } from '../../perceive/graph.js';
 import { withBonds } from '../../perceive/withBonds.js';
 import { findRings } from '../../perceive/findRings.js';
@@ -81,18 +81,28 @@ export function chairFigure(mol: Molecule, options: ChairFigureOptions = {}): Ch
     ...(chemical ? { locants: chemical.locants, numberingRule: chemical.rule } : {}),
   });
   // 2. View and placement.
-  const view = options.view ?? (ring.shape === 'chair' && options.elevationDeg === undefined ? 'template' : 'projected');
+  const view = options.view ?? (ring.shape === 'chair' && ring.size === 6 && options.elevationDeg === undefined ? 'template' : 'projected');
   if (view === 'template' && options.elevationDeg !== undefined) {
     throw usageError('bad-option', 'the chair template is a fixed outline: an elevation applies to the projected view only');
   }
   const placement = view === 'template'
-    ? chairTemplate(ring, mol, { hydrogens: options.hydrogens })
+    ? inFile(mol, () => chairTemplate(ring, mol, { hydrogens: options.hydrogens }))
     : ringProjection(ring, mol, { elevationDeg: options.elevationDeg, hydrogens: options.hydrogens });
   // 3. Layout and rendering with the theme (a background-coloured halo role added when the theme has none).
   const theme = withHalo(loadTheme(options.theme));
   const scene = layoutRing(placement, ring, mol, graph, { labels: options.labels, caption: options.caption, metrics: sceneMetrics(theme), measure: measureText, names: numbering.names, rings });
   const svg = renderSvg(scene, theme, { idPrefix: options.idPrefix ?? 'chair-' });
   return { svg, ring, scene, view, placement, warnings: [...ring.warnings, ...legibilityWarnings(scene)] };
+}
+
+/** Runs `f`; a user error without a file (the layout's chair refusal) gets the record's file and line. */
+function inFile<T>(mol: Molecule, f: () => T): T {
+  try {
+    return f();
+  } catch (err) {
+    if (!(err instanceof ConformarkError) || err.issues.some((i) => i.file)) throw err;
+    throw new ConformarkError(err.issues.map((i) => ({ ...i, file: mol.source.file, line: i.line ?? mol.source.line })));
+  }
 }
 
 function graphOf(mol: Molecule): Graph {

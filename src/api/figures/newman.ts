@@ -3,7 +3,7 @@ import type { Molecule } from '../../model/molecule.js';
 import { usageError, type Warning } from '../../model/errors.js';
 import { buildGraph, type Graph } from '../../perceive/graph.js';
 import { newmanView, type NewmanView } from '../../analysis/newman.js';
-import { couplingsAcrossBond, isSkippedCoupling, type Coupling, type CouplingOptions } from '../../analysis/coupling.js';
+import { couplingsAcrossBond, isSkippedCoupling, noHydrogenWarning, type Coupling, type CouplingOptions } from '../../analysis/coupling.js';
 import { layoutNewman, type NewmanLayoutOptions } from '../../layout/newman/newmanLayout.js';
 import type { Scene } from '../../layout/scene.js';
 import type { Theme } from '../../render/theme.js';
@@ -71,7 +71,8 @@ export function newmanFigure(mol: Molecule, options: NewmanFigureOptions): Newma
   const notes = rotamer ? [`hydroxymethyl ${rotamer.rotamer} (O5–C5–C6–O6 ${torsionText(rotamer.o5Deg)}, C4–C5–C6–O6 ${torsionText(rotamer.c4Deg)})`] : [];
   const scene = layoutNewman(view, mol, { ...options, couplings, metrics: sceneMetrics(theme), measure: measureText, graph, names, rings, notes });
   const svg = renderSvg(scene, theme, { idPrefix: options.idPrefix });
-  const warnings = [...view.warnings, ...couplings.flatMap((c) => c.warnings), ...sceneTextWarnings(scene), ...legibilityWarnings(scene)];
+  const noH = options.couplings ? noHydrogenWarning(mol) : null;
+  const warnings = [...view.warnings, ...couplings.flatMap((c) => c.warnings), ...(noH ? [noH] : []), ...sceneTextWarnings(scene), ...legibilityWarnings(scene)];
   return { svg, view, scene, warnings, couplings };
 }
 

@@ -39,6 +39,9 @@ export function ringName(ring: Pick<RingAnalysis, 'id' | 'atoms'>): string {
 /** Throws the refusal for anything but a chair, pointing to the projected view. */
 export function assertChair(ring: RingAnalysis): void {
   if (ring.shape === 'chair' && ring.size === 6) return;
+  if (ring.shape === 'chair') {
+    throw usageError('not-a-chair', `${ringName(ring)} is a ${ring.size}-membered chair; the template draws six-ring chairs: use --view projected`);
+  }
   const form = ring.descriptor ? ` (${ring.descriptor})` : '';
   // "is planar", "is puckered"; "is a twist-boat", "is an envelope"
   const adjective = ring.shape === 'planar' || ring.shape === 'puckered';
