@@ -63,9 +63,9 @@ describe('groupLabel', () => {
   });
   it('groupLabel names a fused neighbour by its locant and falls back to a condensed formula', () => {
     expect(text(groupLabel(mol, graph, 1, 0, { rings: [[0, 1, 2, 3]], names: new Map([[1, 'C4a']]) }).forward)).toBe('C4a');
-    // propyl: C0–Ca–Cb–Cc
+    // propyl without hydrogens: C0–Ca–Cb–Cc, written with bond dashes
     const p = buildGraph(4, [[0, 1], [1, 2], [2, 3]].map(([a, b]) => ({ a: a!, b: b!, order: 1, perceived: false })));
     const pm = { atoms: ['C', 'C', 'C', 'C'].map((element) => ({ element, name: null })) };
-    expect([text(groupLabel(pm, p, 1, 0).forward), text(groupLabel(pm, p, 1, 0).reversed)]).toEqual(['CCC', 'CCC']);
+    expect([text(groupLabel(pm, p, 1, 0).forward), text(groupLabel(pm, p, 1, 0).reversed)]).toEqual(['C–C–C', 'C–C–C']);
   });
 });

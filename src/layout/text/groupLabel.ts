@@ -116,6 +116,8 @@ export function groupLabel(mol: Pick<Molecule, 'atoms'>, graph: Graph, atom: num
 function condensed(mol: Pick<Molecule, 'atoms'>, graph: Graph, atom: number, from: number, context: GroupContext): GroupLabel {
   const el = (a: number) => mol.atoms[a]!.element;
   const seen = new Set<number>([from]);
+  // a hydrogen-free file: `CO` would read as a carbonyl, so the chain is written with bond dashes (C–O)
+  const dash = mol.atoms.some((a) => a.element === 'H') ? '' : '–';
   const head = (a: number, reversed: boolean) => {
     const h = hText(graph.neighbors[a]!.filter((b) => el(b) === 'H').length);
     return reversed ? `${h}${el(a)}` : `${el(a)}${h}`;
@@ -136,7 +138,8 @@ function condensed(mol: Pick<Molecule, 'atoms'>, graph: Graph, atom: number, fro
     }
     const last = counted.length > 0 && !counted[counted.length - 1]!.startsWith('(') ? counted.pop()! : '';
     const branches = counted.map((p) => (p.startsWith('(') ? p : `(${p})`)).join('');
-    return reversed ? `${last}${branches}${head(a, true)}` : `${head(a, false)}${branches}${last}`;
+    const d = last ? dash : '';
+    return reversed ? `${last}${d}${branches}${head(a, true)}` : `${head(a, false)}${branches}${d}${last}`;
   };
   const forward = write(atom, from, false, 0);
   seen.clear();
