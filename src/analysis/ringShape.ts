@@ -1,5 +1,5 @@
 /**
- * Ring shape and IUPAC ring-form descriptor from Cremer–Pople coordinates (METHODS.md §3.4, §4.1; acceptance
+ * Ring shape and IUPAC ring-form descriptor from Cremer–Pople coordinates (docs/methods.md#shape-assignment, docs/methods.md#five-ring-forms; acceptance
  * windows and planarity thresholds are common practice, no source).
  *
  * Six-rings: nearest canonical point (SIX_RING_FORMS) by great-circle distance on the unit sphere,

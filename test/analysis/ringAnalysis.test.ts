@@ -129,7 +129,7 @@ describe('analyzeRing edge cases', () => {
     const r5 = analyzeRing(fur.mol, fur.graph, fur.ring, { pseudorotation: 'fourier' });
     expect(r5.descriptor).toBe('3E');
     expect(r5.pseudorotation!.method).toBe('fourier');
-    expect(Math.abs(r5.pseudorotation!.phaseDeg - 18)).toBeLessThan(1); // C3′-endo region (METHODS.md §4.1 table)
+    expect(Math.abs(r5.pseudorotation!.phaseDeg - 18)).toBeLessThan(1); // C3′-endo region (docs/methods.md#five-ring-forms table)
     const as = analyzeRing(fur.mol, fur.graph, fur.ring);
     expect(as.pseudorotation!.method).toBe('closed-form');
   });
@@ -160,7 +160,7 @@ describe('analyzeRing edge cases', () => {
     const { mol, graph } = ringMolecule(sixRingAt(0.6, 0, 0), { hydrogens: true });
     const r = analyzeRing(mol, graph, [1, 2, 3, 4, 5, 0], { ordered: true, id: 2 });
     expect(r.atoms).toEqual([1, 2, 3, 4, 5, 0]);
-    expect(r.puckering.thetaDeg!).toBeCloseTo(180, 6); // start one atom later: θ → 180 − θ (§2.2)
+    expect(r.puckering.thetaDeg!).toBeCloseTo(180, 6); // start one atom later: θ → 180 − θ (docs/methods.md#ring-orientation)
     expect(r.referenceRule).toMatch(/user-given/);
     const report = toReportRing(r);
     expect(report.id).toBe(2);
