@@ -13,6 +13,7 @@
 import { displacementsFromModes, ringFromDisplacements, sixRingModes } from '../geometry/cremerPople.js';
 import { cross, dot, sub, unit, DEG } from '../geometry/vec3.js';
 import type { Vec3 } from '../model/molecule.js';
+import type { MediumRingShape } from './mediumRingForms.js';
 
 /** Ring shape words (README.md "JSON documents", `shape`). */
 export type RingShape =
@@ -24,7 +25,8 @@ export type RingShape =
   | 'screw-boat'
   | 'twist'
   | 'planar'
-  | 'puckered';
+  | 'puckered'
+  | Exclude<MediumRingShape, 'chair' | 'boat' | 'twist-boat'>;
 
 /** IUPAC ring-form letters (JCBN 1980); screw-boats have none. */
 export type FormLetter = 'C' | 'B' | 'S' | 'H' | 'E' | 'T';

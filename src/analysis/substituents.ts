@@ -77,6 +77,7 @@ const WORDS: Record<'plain' | 'pseudo' | 'bow', [SubstituentPosition, Substituen
 /** The role of ring position j for a ring of this shape (rules in the file comment). */
 function roleOf(j: number, shape: RingShape, form: CanonicalForm | null, plane: ReferencePlane | null): Role {
   const exoplanar = plane ? [...plane.above, ...plane.below].includes(j) : false;
+  if (form === null && shape !== 'planar') return 'pseudo'; // seven- and eight-ring forms, puckered rings
   switch (shape) {
     case 'planar':
       return 'none';
