@@ -1,5 +1,5 @@
 /**
- * The per-record part of the `inspect` report (DESIGN.md `conformark/report@1`): atoms, bonds, every ring
+ * The per-record part of the `inspect` report (README.md `conformark/report@1`): atoms, bonds, every ring
  * analysed and, on request, ring ³J(H,H). Pure: the caller supplies a molecule whose bonds are known and the
  * rings found on its graph; the energy and source come from the api layer.
  */

@@ -1,4 +1,4 @@
-/** Atom selection tokens (DESIGN.md "Inputs"): a number is a 1-based file index, anything else an atom name. */
+/** Atom selection tokens (README.md "Commands"): a number is a 1-based file index, anything else an atom name. */
 import { ConformarkError } from '../model/errors.js';
 import type { Molecule } from '../model/molecule.js';
 
