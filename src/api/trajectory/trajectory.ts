@@ -12,6 +12,7 @@ import { protectInput } from '../../io/writeAtomic.js';
 import { PHASE_THRESHOLD } from '../../geometry/cremerPople.js';
 import { PuckerValues } from '../../geometry/puckerKernel.js';
 import { torsionAt } from '../../geometry/torsionAt.js';
+import { longRingBond, makeWhole, type PeriodicBox } from '../../geometry/periodicBox.js';
 import { PLANAR_FORM, PUCKERED_FORM } from '../../analysis/shapeTable.js';
 import { TrajectoryStats, type DwellStats } from '../../analysis/trajectoryStats.js';
 import type { RingShapeOptions } from '../../analysis/ringShape.js';
@@ -22,6 +23,7 @@ import { TextStream } from './csvStream.js';
 import { TrajectoryRows } from './trajectoryRows.js';
 import { parseTimestep, type Timestep } from './timestep.js';
 import { trajectorySetup } from './trajectorySetup.js';
+import { FrameBoxes, parseBox, ringBondLimits } from './trajectoryBox.js';
 import { TrajectoryPlots } from './trajectoryPlots.js';
 import { SHAPE_ORDER } from './trajectoryTheme.js';
 import { writeTrajectoryFiles } from './trajectoryOutput.js';
@@ -52,6 +54,13 @@ export interface TrajectoryOptions extends RingShapeOptions {
   readonly toleranceA?: number;
   /** Outer radius of the five-ring wheel, degrees of τm. Default 60. */
   readonly maxAmplitudeDeg?: number;
+  /**
+   * Periodic box for every frame, `"a b c"` or `"a b c α β γ"` (Å, degrees), or a box object. Default: the
+   * file's own cell (PDB CRYST1) where it has one. With a box, the ring (and each torsion) is made whole by
+   * the minimum image along its bonds in every frame; without one, a ring bond longer than the bond cut-off
+   * stops the run.
+   */
+  readonly box?: PeriodicBox | string;
   /** Reader options (format, limits). */
   readonly read?: ReadOptions;
   /** Called every few thousand frames and at the end with frames read and frames analysed. */
@@ -65,6 +74,8 @@ export interface TrajectorySummary {
   readonly ring: { readonly atoms: readonly number[]; readonly size: number; readonly locants: readonly string[]; readonly referenceRule: string };
   readonly frames: { readonly read: number; readonly analysed: number; readonly first: number; readonly last: number; readonly from: number; readonly to: number | null; readonly stride: number };
   readonly timestep: Timestep | null;
+  /** Where the periodic box came from: `option` (`--box`), `file` (at least one frame's own cell) or null. */
+  readonly box: 'option' | 'file' | null;
   readonly occupancy: Readonly<Record<string, number>>;
   readonly counts: Readonly<Record<string, number>>;
   readonly transitions: Readonly<Record<string, Readonly<Record<string, number>>>>;
@@ -83,6 +94,17 @@ export interface TrajectorySummary {
 
 function frameIssue(path: string, frame: Frame, code: string, message: string): ConformarkError {
   return new ConformarkError({ code, file: path, line: frame.line, message: `frame ${frame.index} ${message}` });
+}
+
+/** The error for a ring bond longer than the bond cut-off (after the minimum image when there is a box). */
+function brokenRing(path: string, frame: Frame, c: Float64Array, ring: Int32Array, k: number, boxed: boolean): ConformarkError {
+  const i = ring[k]!, j = ring[(k + 1) % ring.length]!;
+  const d = Math.hypot(c[3 * j]! - c[3 * i]!, c[3 * j + 1]! - c[3 * i + 1]!, c[3 * j + 2]! - c[3 * i + 2]!);
+  const bond = `ring bond ${i + 1}-${j + 1} is ${d.toFixed(2)} Å`;
+  const message = boxed
+    ? `ring broken at frame ${frame.index}: ${bond} even at its nearest periodic image (wrong box?)`
+    : `ring broken across the periodic box at frame ${frame.index} (${bond}): give the box (--box "a b c") or unwrap the trajectory`;
+  return new ConformarkError({ code: 'ring-broken', file: path, line: frame.line, message });
 }
 
 /** Adds "frame N:" to a reader error about the frame after `last`. */
@@ -125,6 +147,10 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
   const puckeredCat = catOf(PUCKERED_FORM);
   const csvDescriptor = table.descriptors.map((d) => (d === null ? '' : /[",]/.test(d) ? `"${d.replace(/"/g, '""')}"` : d));
   const v = new PuckerValues();
+  const optionBox = typeof options.box === 'string' ? parseBox(options.box) : options.box ?? null;
+  const fileBoxes = !optionBox && first.source.format === 'pdb' ? new FrameBoxes() : null;
+  const limits = ringBondLimits(first, ring, options.toleranceA);
+  let boxedFrames = 0;
   let read = 0;
   let analysed = 0;
   let firstAnalysed = 0;
@@ -153,6 +179,14 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
         const missing = c.length / 3 <= maxRingAtom ? ` (atom ${maxRingAtom + 1}, used by the analysis, is missing)` : '';
         throw frameIssue(path, frame, 'frame-atom-count', `has ${c.length / 3} atoms, frame 1 had ${setup.atomCount}${missing}`);
       }
+      const box = optionBox ?? fileBoxes?.of(frame.properties) ?? null;
+      if (box) {
+        boxedFrames++;
+        makeWhole(c, ring, box);
+        for (const t of torsions) makeWhole(c, t, box);
+      }
+      const broken = longRingBond(c, ring, limits);
+      if (broken >= 0) throw brokenRing(path, frame, c, ring, broken, box !== null);
       if (!kernel.measure(c, ring, v) || !Number.isFinite(v.Q)) {
         throw frameIssue(path, frame, 'degenerate-ring', Number.isFinite(v.Q) ? 'has collinear ring atoms' : 'has non-finite ring atom coordinates');
       }
@@ -220,6 +254,7 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
     ring: { atoms: Array.from(ring, (a) => a + 1), size: n, locants: setup.locants, referenceRule: setup.referenceRule },
     frames: { read, analysed, first: firstAnalysed, last: lastAnalysed, from, to: Number.isFinite(to) ? to : null, stride },
     timestep,
+    box: optionBox ? 'option' : boxedFrames > 0 ? 'file' : null,
     occupancy: st.occupancy,
     counts: st.counts,
     transitions: st.transitions,

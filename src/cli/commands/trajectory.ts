@@ -11,6 +11,7 @@ interface TrajectoryFlags {
   from?: string;
   to?: string;
   timestep?: string[];
+  box?: string;
   torsion?: string[];
   formats?: string;
   theme?: string;
@@ -51,6 +52,7 @@ export function registerTrajectory(program: Command): void {
     .option('--from <n>', 'first frame to analyse, counted from 1 (default 1)')
     .option('--to <n>', 'last frame to analyse (default: the last)')
     .option('--timestep <value...>', 'time between frames with a unit, e.g. "2 ps" or 2ps (fs, ps, ns, us, ms, s)')
+    .option('--box <cell>', 'periodic box "a b c" or "a b c alpha beta gamma" (Å, degrees); default the file\'s cell (PDB CRYST1)')
     .option('--torsion <A-B-C-D...>', 'torsions to add as CSV columns (numbers from 1 or atom names); repeatable')
     .option('--formats <list>', 'figure formats, comma-separated: svg, png, pdf (default svg)')
     .option('--dpi <n>', DPI_HELP)
@@ -68,6 +70,7 @@ export function registerTrajectory(program: Command): void {
           to: flags.to === undefined ? undefined : wholeNumber('--to', flags.to),
           timestep: flags.timestep === undefined ? undefined : parseTimestep(flags.timestep.join(' ')),
           torsions: flags.torsion ?? [],
+          box: flags.box,
           formats: formats(flags.formats),
           theme: flags.theme,
           dpi: dpiOption(flags.dpi),
