@@ -6,7 +6,7 @@
 import { resolve } from 'node:path';
 import { ConformarkError, ParseError, usageError, type Warning } from '../../model/errors.js';
 import type { FormatName } from '../../model/molecule.js';
-import { readFrames, type Frame } from '../../io/readFrames.js';
+import type { Frame } from '../../io/readFrames.js';
 import type { ReadOptions } from '../../io/limits.js';
 import { protectInput } from '../../io/writeAtomic.js';
 import { PHASE_THRESHOLD } from '../../geometry/cremerPople.js';
@@ -18,7 +18,7 @@ import { TrajectoryStats, type DwellStats } from '../../analysis/trajectoryStats
 import type { RingShapeOptions } from '../../analysis/ringShape.js';
 import type { FigureFormat } from '../figures/writeFigure.js';
 import type { Theme } from '../../render/theme.js';
-import { readRecord } from '../prepare.js';
+import { openTrajectory, type SourceFrame } from './trajectorySource.js';
 import { TextStream } from './csvStream.js';
 import { TrajectoryRows } from './trajectoryRows.js';
 import { parseTimestep, type Timestep } from './timestep.js';
@@ -61,6 +61,8 @@ export interface TrajectoryOptions extends RingShapeOptions {
    * stops the run.
    */
   readonly box?: PeriodicBox | string;
+  /** Topology for a coordinate-only trajectory (DCD): a PDB (or SDF/MOL/XYZ) of the same atoms in the same order. */
+  readonly topology?: string;
   /** Reader options (format, limits). */
   readonly read?: ReadOptions;
   /** Called every few thousand frames and at the end with frames read and frames analysed. */
@@ -70,7 +72,7 @@ export interface TrajectoryOptions extends RingShapeOptions {
 /** What `analyzeTrajectory` returns (the content of `summary.json` plus the files written). */
 export interface TrajectorySummary {
   readonly schema: 'conformark/trajectory@1';
-  readonly source: { readonly path: string; readonly format: FormatName | null };
+  readonly source: { readonly path: string; readonly format: FormatName | 'dcd' | null; readonly topology: string | null };
   readonly ring: { readonly atoms: readonly number[]; readonly size: number; readonly locants: readonly string[]; readonly referenceRule: string };
   readonly frames: { readonly read: number; readonly analysed: number; readonly first: number; readonly last: number; readonly from: number; readonly to: number | null; readonly stride: number };
   readonly timestep: Timestep | null;
@@ -93,7 +95,7 @@ export interface TrajectorySummary {
 }
 
 function frameIssue(path: string, frame: Frame, code: string, message: string): ConformarkError {
-  return new ConformarkError({ code, file: path, line: frame.line, message: `frame ${frame.index} ${message}` });
+  return new ConformarkError({ code, file: path, line: frame.line || null, message: `frame ${frame.index} ${message}` });
 }
 
 /** The error for a ring bond longer than the bond cut-off (after the minimum image when there is a box). */
@@ -104,7 +106,7 @@ function brokenRing(path: string, frame: Frame, c: Float64Array, ring: Int32Arra
   const message = boxed
     ? `ring broken at frame ${frame.index}: ${bond} even at its nearest periodic image (wrong box?)`
     : `ring broken across the periodic box at frame ${frame.index} (${bond}): give the box (--box "a b c") or unwrap the trajectory`;
-  return new ConformarkError({ code: 'ring-broken', file: path, line: frame.line, message });
+  return new ConformarkError({ code: 'ring-broken', file: path, line: frame.line || null, message });
 }
 
 /** Adds "frame N:" to a reader error about the frame after `last`. */
@@ -124,10 +126,12 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
   const from = options.from ?? 1;
   const to = options.to ?? Infinity;
   if (to < from) throw usageError('bad-option', `--to ${to} is before --from ${from}`);
-  const timestep = typeof options.timestep === 'string' ? parseTimestep(options.timestep) : options.timestep ?? null;
+  const given = typeof options.timestep === 'string' ? parseTimestep(options.timestep) : options.timestep ?? null;
   protectInput(path);
   // 2. Frame 1 fixes bonds, ring, numbering and torsions.
-  const first = await readRecord(path, 1, options.read);
+  const source = await openTrajectory(path, options.topology, options.read);
+  const { first } = source;
+  const timestep: Timestep | null = given ?? (source.timestepPs !== null ? { value: +source.timestepPs.toPrecision(9), unit: 'ps' } : null);
   const setup = trajectorySetup(first, { ...options, ring: options.ring ?? '1', torsions: options.torsions ?? [] });
   const { ring, kernel, table, torsions } = setup;
   const n = ring.length;
@@ -148,7 +152,7 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
   const csvDescriptor = table.descriptors.map((d) => (d === null ? '' : /[",]/.test(d) ? `"${d.replace(/"/g, '""')}"` : d));
   const v = new PuckerValues();
   const optionBox = typeof options.box === 'string' ? parseBox(options.box) : options.box ?? null;
-  const fileBoxes = !optionBox && first.source.format === 'pdb' ? new FrameBoxes() : null;
+  const fileBoxes = !optionBox && !source.binary && first.source.format === 'pdb' ? new FrameBoxes() : null;
   const limits = ringBondLimits(first, ring, options.toleranceA);
   let boxedFrames = 0;
   let read = 0;
@@ -156,11 +160,11 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
   let firstAnalysed = 0;
   let lastAnalysed = 0;
   let planarFrames = 0;
-  const it = readFrames(path, { ...options.read, reuse: true })[Symbol.asyncIterator]();
+  const it = source.frames;
   try {
     // 3. The stream: one line and a few counters per analysed frame.
     for (;;) {
-      let next: IteratorResult<Frame>;
+      let next: IteratorResult<SourceFrame>;
       try {
         next = await it.next();
       } catch (err) {
@@ -179,7 +183,7 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
         const missing = c.length / 3 <= maxRingAtom ? ` (atom ${maxRingAtom + 1}, used by the analysis, is missing)` : '';
         throw frameIssue(path, frame, 'frame-atom-count', `has ${c.length / 3} atoms, frame 1 had ${setup.atomCount}${missing}`);
       }
-      const box = optionBox ?? fileBoxes?.of(frame.properties) ?? null;
+      const box = optionBox ?? frame.cell ?? fileBoxes?.of(frame.properties) ?? null;
       if (box) {
         boxedFrames++;
         makeWhole(c, ring, box);
@@ -250,7 +254,7 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
   const fs = formStats.summary();
   const summary: Omit<TrajectorySummary, 'files'> = {
     schema: 'conformark/trajectory@1',
-    source: { path, format: first.source.format },
+    source: { path, format: source.binary ?? first.source.format, topology: options.topology ?? null },
     ring: { atoms: Array.from(ring, (a) => a + 1), size: n, locants: setup.locants, referenceRule: setup.referenceRule },
     frames: { read, analysed, first: firstAnalysed, last: lastAnalysed, from, to: Number.isFinite(to) ? to : null, stride },
     timestep,
