@@ -35,12 +35,33 @@ function bigEndian(le: Buffer): Buffer {
   return out;
 }
 
+/** The fixture without its unit-cell records (header word 11 set to 0), as a vacuum run writes it. */
+function withoutCell(le: Buffer): Buffer {
+  const parts: Buffer[] = [];
+  const head = Buffer.from(le.subarray(0, 92));
+  head.writeInt32LE(0, 8 + 40);
+  parts.push(head);
+  let at = 92;
+  for (let k = 0; k < 2; k++) {
+    const len = le.readInt32LE(at);
+    parts.push(le.subarray(at, at + len + 8));
+    at += len + 8;
+  }
+  while (at < le.length) {
+    const len = le.readInt32LE(at);
+    if (len !== 48) parts.push(le.subarray(at, at + len + 8));
+    at += len + 8;
+  }
+  return Buffer.concat(parts);
+}
+
 let dir: string;
 beforeAll(() => {
   dir = mkdtempSync(join(tmpdir(), 'conformark-dcd-'));
   const le = readFileSync(join(FIX, 'ring.dcd'));
   writeFileSync(join(dir, 'be.dcd'), bigEndian(le));
   writeFileSync(join(dir, 'cut.dcd'), le.subarray(0, le.length - 10));
+  writeFileSync(join(dir, 'nocell.dcd'), withoutCell(le));
 });
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
@@ -61,6 +82,26 @@ describe('dcdFrames', () => {
       expect(k).toBe(ref.frames.length);
     });
   }
+
+  it('dcdFrames(no unit cell) decodes the same coordinates with a null cell', async () => {
+    expect((await dcdHeader(join(dir, 'nocell.dcd'))).hasCell).toBe(false);
+    let k = 0;
+    for await (const f of dcdFrames(join(dir, 'nocell.dcd'))) {
+      const r = ref.frames[k++]!;
+      expect(f.cell).toBeNull();
+      r.positions.forEach((p, i) => p.forEach((x, a) => expect(f.coords[3 * i + a]).toBeCloseTo(x, 5)));
+    }
+    expect(k).toBe(ref.frames.length);
+  });
+
+  it('analyzeTrajectory(wrapped DCD without a cell) stops with the broken-ring error; --box joins it', async () => {
+    const top = join(FIX, 'ring.pdb');
+    const err = await analyzeTrajectory(join(dir, 'nocell.dcd'), { dir: join(dir, 'nc'), topology: top }).catch((e: unknown) => e);
+    expect((err as ConformarkError).issues[0]!.message).toMatch(/^ring broken across the periodic box at frame 2/);
+    const s = await analyzeTrajectory(join(dir, 'nocell.dcd'), { dir: join(dir, 'nc2'), topology: top, box: '20 20 20' });
+    expect(s.box).toBe('option');
+    expect(s.frames.analysed).toBe(ref.frames.length);
+  });
 
   it('dcdFrames(truncated file) names the truncated frame', async () => {
     const err = await (async () => { for await (const _ of dcdFrames(join(dir, 'cut.dcd'))) void _; })().catch((e: unknown) => e);
