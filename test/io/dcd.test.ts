@@ -128,6 +128,16 @@ describe('analyzeTrajectory(DCD)', () => {
     });
   });
 
+  it('analyzeTrajectory(dcd, startTime 1 ns) shifts the time column by 1000 ps; a bad start time is refused', async () => {
+    const out = join(dir, 'st');
+    const s = await analyzeTrajectory(join(FIX, 'ring.dcd'), { dir: out, topology: join(FIX, 'ring.pdb'), startTime: '1 ns' });
+    expect(s.startTime).toBe(1000);
+    const times = readFileSync(join(out, 'puckering.csv'), 'utf8').trim().split('\n').slice(1).map((l) => Number(l.split(',')[1]));
+    times.forEach((t, k) => expect(t).toBeCloseTo(1000 + 2 * k, 4));
+    const err = await analyzeTrajectory(join(FIX, 'ring.dcd'), { dir: join(dir, 'st2'), topology: join(FIX, 'ring.pdb'), startTime: '-3 ps' }).catch((e: unknown) => e);
+    expect((err as ConformarkError).issues[0]!.message).toMatch(/--start-time expects/);
+  });
+
   it('analyzeTrajectory(dcd) without a topology asks for one', async () => {
     const err = await analyzeTrajectory(join(FIX, 'ring.dcd'), { dir: join(dir, 'x') }).catch((e: unknown) => e);
     expect((err as ConformarkError).code).toBe('no-topology');

@@ -21,7 +21,7 @@ import type { Theme } from '../../render/theme.js';
 import { openTrajectory, type SourceFrame } from './trajectorySource.js';
 import { TextStream } from './csvStream.js';
 import { TrajectoryRows } from './trajectoryRows.js';
-import { parseTimestep, type Timestep } from './timestep.js';
+import { convertTime, parseStartTime, parseTimestep, type Timestep } from './timestep.js';
 import { trajectorySetup } from './trajectorySetup.js';
 import { FrameBoxes, parseBox, ringBondLimits } from './trajectoryBox.js';
 import { TrajectoryPlots } from './trajectoryPlots.js';
@@ -42,6 +42,8 @@ export interface TrajectoryOptions extends RingShapeOptions {
   readonly to?: number;
   /** Time between file frames, e.g. `{ value: 2, unit: 'ps' }` or `"2 ps"`. Default none (x is the frame). */
   readonly timestep?: Timestep | string;
+  /** Time of frame 1, e.g. `"10 ns"` (used with a timestep). Default: from the file where it carries it (DCD), else 0. */
+  readonly startTime?: Timestep | string;
   /** Torsions to add as CSV columns, `A-B-C-D` (numbers from 1 or atom names). Default none. */
   readonly torsions?: readonly string[];
   /** Figure formats written for each figure. Default `['svg']`. */
@@ -76,6 +78,8 @@ export interface TrajectorySummary {
   readonly ring: { readonly atoms: readonly number[]; readonly size: number; readonly locants: readonly string[]; readonly referenceRule: string };
   readonly frames: { readonly read: number; readonly analysed: number; readonly first: number; readonly last: number; readonly from: number; readonly to: number | null; readonly stride: number };
   readonly timestep: Timestep | null;
+  /** Time of frame 1 in the timestep's unit (0 unless given or read from the file); null without a timestep. */
+  readonly startTime: number | null;
   /** Where the periodic box came from: `option` (`--box`), `file` (at least one frame's own cell) or null. */
   readonly box: 'option' | 'file' | null;
   readonly occupancy: Readonly<Record<string, number>>;
@@ -135,6 +139,8 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
   const setup = trajectorySetup(first, { ...options, ring: options.ring ?? '1', torsions: options.torsions ?? [] });
   const { ring, kernel, table, torsions } = setup;
   const n = ring.length;
+  const startGiven = typeof options.startTime === 'string' ? parseStartTime(options.startTime) : options.startTime ?? null;
+  const start = !timestep ? 0 : startGiven ? convertTime(startGiven.value, startGiven.unit, timestep.unit) : source.startPs !== null ? convertTime(source.startPs, 'ps', timestep.unit) : 0;
   const maxRingAtom = Math.max(...ring, ...torsions.flat());
   const dir = resolve(options.dir);
   const csv = new TextStream(resolve(dir, 'puckering.csv'));
@@ -203,7 +209,7 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
       rows.number(idx, 0);
       if (timestep) {
         rows.comma();
-        rows.number((idx - 1) * timestep.value, 6);
+        rows.number(start + (idx - 1) * timestep.value, 6);
       }
       rows.comma();
       rows.number(v.Q, 4);
@@ -258,6 +264,7 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
     ring: { atoms: Array.from(ring, (a) => a + 1), size: n, locants: setup.locants, referenceRule: setup.referenceRule },
     frames: { read, analysed, first: firstAnalysed, last: lastAnalysed, from, to: Number.isFinite(to) ? to : null, stride },
     timestep,
+    startTime: timestep ? start : null,
     box: optionBox ? 'option' : boxedFrames > 0 ? 'file' : null,
     occupancy: st.occupancy,
     counts: st.counts,

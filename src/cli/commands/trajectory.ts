@@ -12,6 +12,7 @@ interface TrajectoryFlags {
   to?: string;
   timestep?: string[];
   box?: string;
+  startTime?: string[];
   topology?: string;
   torsion?: string[];
   formats?: string;
@@ -53,6 +54,7 @@ export function registerTrajectory(program: Command): void {
     .option('--from <n>', 'first frame to analyse, counted from 1 (default 1)')
     .option('--to <n>', 'last frame to analyse (default: the last)')
     .option('--timestep <value...>', 'time between frames with a unit, e.g. "2 ps" or 2ps (fs, ps, ns, us, ms, s)')
+    .option('--start-time <value...>', 'time of frame 1 with a unit, e.g. "10 ns" (default: from the file where it has it, else 0)')
     .option('--topology <file>', 'atoms of a coordinate-only trajectory (DCD): a PDB of the same system, same atom order')
     .option('--box <cell>', 'periodic box "a b c" or "a b c alpha beta gamma" (Å, degrees); default the file\'s cell (PDB CRYST1)')
     .option('--torsion <A-B-C-D...>', 'torsions to add as CSV columns (numbers from 1 or atom names); repeatable')
@@ -73,6 +75,7 @@ export function registerTrajectory(program: Command): void {
           timestep: flags.timestep === undefined ? undefined : parseTimestep(flags.timestep.join(' ')),
           torsions: flags.torsion ?? [],
           box: flags.box,
+          startTime: flags.startTime?.join(' '),
           topology: flags.topology,
           formats: formats(flags.formats),
           theme: flags.theme,
