@@ -1,14 +1,18 @@
 /**
  * PDB reader as a push-style line consumer: ATOM/HETATM (first alternate location only), CONECT (→ bonds,
  * deduplicated, order 1), MODEL/ENDMDL (→ frames). Title from TITLE, else COMPND, else HEADER, else the file
- * name. CONECT records usually follow the last model, so without a `conect` list given up front the models
- * are held until the end of the input; `readRecords` scans a PDB file's CONECT lines first and streams.
+ * name. CRYST1 (the periodic cell) → the `CRYST1` property, `a b c α β γ`. CONECT records usually follow the
+ * last model, so without a `conect` list given up front the models are held until the end of the input;
+ * `readRecords` scans a PDB file's CONECT lines first and streams.
  */
 import type { Issue } from '../model/errors.js';
 import type { ReadLimits } from './limits.js';
 import { parseConect, parsePdbAtom, type Conect } from './pdbLine.js';
 import { RecordBuilder } from './recordBuilder.js';
 import { failure, issue, type Emit, type LineConsumer } from './sink.js';
+
+/** Column ends of a, b, c, α, β, γ in a CRYST1 record (the first field starts at column 7). */
+const CRYST1_ENDS = [15, 24, 33, 40, 47, 54];
 
 interface Model {
   readonly builder: RecordBuilder;
@@ -27,6 +31,8 @@ export class PdbConsumer implements LineConsumer {
   private readonly streaming: boolean;
   private count = 0;
   private stopped = false;
+  /** The last CRYST1 cell, `a b c α β γ` (Å, degrees), passed on as the `CRYST1` property of each model. */
+  private cryst1 = '';
 
   /** `conect`: the file's CONECT records, when already known (then each model is emitted at ENDMDL). */
   constructor(
@@ -51,6 +57,11 @@ export class PdbConsumer implements LineConsumer {
       const c = parseConect(line, lineNo);
       if (typeof c === 'string') return this.fatal(issue('bad-conect', this.file, lineNo, c));
       this.conect.push(c);
+      return;
+    }
+    if (tag === 'CRYST1') {
+      const cell = CRYST1_ENDS.map((end, k) => line.slice(k === 0 ? 6 : CRYST1_ENDS[k - 1], end).trim());
+      this.cryst1 = cell.every((f) => f !== '' && Number.isFinite(Number(f))) ? cell.join(' ') : '';
       return;
     }
     if (tag === 'TITLE' || tag === 'COMPND' || tag === 'HEADER') {
@@ -118,7 +129,7 @@ export class PdbConsumer implements LineConsumer {
       }
     }
     const title = this.titles.TITLE || this.titles.COMPND || this.titles.HEADER || baseName(this.file);
-    const result = m.builder.finish(title, {}, m.index, m.line, this.conect.length > 0);
+    const result = m.builder.finish(title, this.cryst1 ? { CRYST1: this.cryst1 } : {}, m.index, m.line, this.conect.length > 0);
     if ('code' in result) this.emit(failure(result));
     else this.emit({ ok: true, molecule: result });
   }
