@@ -31,7 +31,16 @@ export interface RecordReport {
   index: number;
   title: string;
   energy: { value: number; unit: string; field: string } | null;
-  atoms: { id: number; element: string; name: string | null; xyz: [number, number, number] }[];
+  atoms: {
+    id: number;
+    element: string;
+    name: string | null;
+    /** The atom's residue when the file has residues (PDB, mmCIF, MOL2), else null. */
+    residue: { name: string; number: number; insertion: string; chain: string } | null;
+    /** The atom's serial in the file (PDB/mmCIF/MOL2 atom id), else null; select it with `#serial`. */
+    serial: number | null;
+    xyz: [number, number, number];
+  }[];
   bonds: { atoms: [number, number]; order: number; perceived: boolean }[];
   rings: ReportRing[];
   couplings?: (CouplingJson & { ring: number })[];
@@ -58,6 +67,10 @@ export function recordReport(
       id: i + 1,
       element: a.element,
       name: a.name,
+      residue: a.residue === undefined || a.residueNumber === undefined
+        ? null
+        : { name: a.residue, number: a.residueNumber, insertion: a.insertionCode ?? '', chain: a.chain ?? '' },
+      serial: a.serial ?? null,
       xyz: [c[3 * i]!, c[3 * i + 1]!, c[3 * i + 2]!],
     })),
     bonds: (mol.bonds ?? []).map((b) => ({ atoms: [b.a + 1, b.b + 1], order: b.order, perceived: b.perceived })),

@@ -88,7 +88,17 @@ export class PdbConsumer implements LineConsumer {
       else if (a.altLoc !== m.altLoc) return;
     }
     if (a.serial >= 0 && !m.serials.has(a.serial)) m.serials.set(a.serial, m.builder.atomCount);
-    const atom = { element: a.element, name: a.name, residue: a.residue, charge: a.charge };
+    const atom = {
+      element: a.element,
+      name: a.name,
+      residue: a.residue,
+      ...(Number.isNaN(a.residueNumber) ? {} : { residueNumber: a.residueNumber }),
+      insertionCode: a.insertionCode,
+      chain: a.chain,
+      ...(a.serial >= 0 ? { serial: a.serial } : {}),
+      altLoc: a.altLoc.trim(),
+      charge: a.charge,
+    };
     const err = m.builder.addAtom(atom, a.x, a.y, a.z, lineNo);
     if (err) this.failModel(m, err);
   }

@@ -12,6 +12,14 @@ export interface PdbAtom {
   readonly name: string;
   readonly altLoc: string;
   readonly residue: string;
+  /** Chain identifier (column 22), `''` when blank. */
+  readonly chain: string;
+  /** Residue sequence number (columns 23-26); NaN when blank or not a number. */
+  readonly residueNumber: number;
+  /** Insertion code (column 27), `''` when blank. */
+  readonly insertionCode: string;
+  /** Occupancy (columns 55-60), 1 when blank. */
+  readonly occupancy: number;
   readonly element: string;
   readonly x: number;
   readonly y: number;
@@ -41,6 +49,10 @@ export function parsePdbAtom(line: string): PdbAtom | { code: string; message: s
     name: rawName.trim(),
     altLoc: line.charAt(16),
     residue: line.slice(17, 20).trim(),
+    chain: line.charAt(21).trim(),
+    residueNumber: residueSeq(line.slice(22, 26)),
+    insertionCode: line.charAt(26).trim(),
+    occupancy: occupancyOf(line.slice(54, 60)),
     element,
     x: xyz[0]!,
     y: xyz[1]!,
@@ -65,6 +77,17 @@ export function elementFromName(rawName: string): string | undefined {
   }
   const letter = /[A-Za-z]/.exec(name.slice(1))?.[0];
   return letter ? elementInfo(letter)?.symbol : undefined;
+}
+
+/** resSeq as an integer (hybrid-36 and other non-numeric text give NaN: the atom then has no residue number). */
+function residueSeq(text: string): number {
+  const t = text.trim();
+  return /^-?\d+$/.test(t) ? Number(t) : Number.NaN;
+}
+
+function occupancyOf(text: string): number {
+  const v = parseNumber(text);
+  return Number.isFinite(v) ? v : 1;
 }
 
 function parseCharge(text: string): number {
