@@ -78,7 +78,11 @@ export function recordReport(
     bonds: (mol.bonds ?? []).map((b) => ({ atoms: [b.a + 1, b.b + 1], order: b.order, perceived: b.perceived })),
     rings: analysed.map(toReportRing),
     // aromatic and other sp²-only rings carry no nearly-planar warning (analyzeRing leaves it out)
-    warnings: analysed.flatMap((r) => r.warnings.map((w) => ({ ...w, message: `ring ${r.id}: ${w.message}` }))),
+    // what the reader read past (close contacts between residues, CONECT not applied) comes first
+    warnings: [
+      ...(mol.warnings ?? []),
+      ...analysed.flatMap((r) => r.warnings.map((w) => ({ ...w, message: `ring ${r.id}: ${w.message}` }))),
+    ],
   };
   if (options.couplings) {
     const noH = noHydrogenWarning(mol);

@@ -64,4 +64,13 @@ export const FORMATS: ReadonlyMap<FormatName, FormatSpec> = new Map<FormatName, 
       consumer: (file, limits, emit, extras) => new PdbConsumer(file, limits, emit, extras.conect),
     },
   ],
+  [
+    'pdbqt',
+    {
+      extensions: ['.pdbqt'],
+      // AutoDock's torsion tree lines only occur in PDBQT
+      sniff: (lines) => (lines.some((l) => /^(ROOT|ENDROOT|BRANCH|TORSDOF)\b/.test(l)) && lines.some((l) => /^(ATOM  |HETATM)/.test(l)) ? 3 : 0),
+      consumer: (file, limits, emit, extras) => new PdbConsumer(file, limits, emit, extras.conect, 'pdbqt'),
+    },
+  ],
 ]);

@@ -6,6 +6,9 @@ import { elementInfo } from '../model/elements.js';
 import { parseNumber, scanCount } from './numbers.js';
 import { quote } from './sink.js';
 
+/** Plain PDB, or PDBQT (AutoDock: partial charge in columns 71-76, atom type in columns 78-79). */
+export type PdbDialect = 'pdb' | 'pdbqt';
+
 /** One parsed ATOM/HETATM line. */
 export interface PdbAtom {
   readonly serial: number;
@@ -25,10 +28,12 @@ export interface PdbAtom {
   readonly y: number;
   readonly z: number;
   readonly charge: number;
+  /** PDBQT partial charge (columns 71-76). */
+  readonly partialCharge?: number;
 }
 
 /** Parses an ATOM/HETATM line, or returns `{ code, message }`. */
-export function parsePdbAtom(line: string): PdbAtom | { code: string; message: string } {
+export function parsePdbAtom(line: string, dialect: PdbDialect = 'pdb'): PdbAtom | { code: string; message: string } {
   const xyz = [parseNumber(line.slice(30, 38)), parseNumber(line.slice(38, 46)), parseNumber(line.slice(46, 54))];
   const bad = xyz.findIndex((v) => !Number.isFinite(v));
   if (bad >= 0) {
@@ -37,10 +42,11 @@ export function parsePdbAtom(line: string): PdbAtom | { code: string; message: s
     return { code: 'bad-number', message: `${'xyz'[bad]} coordinate ${quote(text)} ${what} (columns ${31 + 8 * bad}-${38 + 8 * bad})` };
   }
   const rawName = line.slice(12, 16);
-  const column = line.slice(76, 78).trim();
-  const element = column !== '' ? elementInfo(column)?.symbol : elementFromName(rawName);
+  const qt = dialect === 'pdbqt';
+  const column = (qt ? line.slice(77, 79) : line.slice(76, 78)).trim();
+  const element = column !== '' ? (qt ? autodockElement(column) : elementInfo(column)?.symbol) : elementFromName(rawName);
   if (!element) {
-    const what = column !== '' ? `unknown element ${quote(column)} (columns 77-78)` : `no element for atom name ${quote(rawName)}`;
+    const what = column !== '' ? `unknown ${qt ? 'atom type' : 'element'} ${quote(column)} (columns ${qt ? '78-79' : '77-78'})` : `no element for atom name ${quote(rawName)}`;
     return { code: 'unknown-element', message: what };
   }
   const serialText = line.slice(6, 11).trim();
@@ -57,8 +63,25 @@ export function parsePdbAtom(line: string): PdbAtom | { code: string; message: s
     x: xyz[0]!,
     y: xyz[1]!,
     z: xyz[2]!,
-    charge: parseCharge(line.slice(78, 80)),
+    charge: qt ? 0 : parseCharge(line.slice(78, 80)),
+    ...(qt && Number.isFinite(parseNumber(line.slice(70, 76))) ? { partialCharge: parseNumber(line.slice(70, 76)) } : {}),
   };
+}
+
+/**
+ * Element of an AutoDock 4 atom type (Morris et al. 2009, J. Comput. Chem. 30, 2785): A is aromatic carbon,
+ * NA/NS/OA/OS/SA acceptor nitrogen/oxygen/sulfur, HD/HS donor hydrogens; G0–G9/CG0–CG9 are glue pseudo-atoms
+ * read as carbon; other types are element symbols.
+ */
+export function autodockElement(type: string): string | undefined {
+  const t = type.trim();
+  const upper = t.toUpperCase();
+  if (upper === 'A' || /^C?G\d$/.test(upper)) return 'C';
+  if (upper === 'NA' || upper === 'NS') return 'N';
+  if (upper === 'OA' || upper === 'OS') return 'O';
+  if (upper === 'SA') return 'S';
+  if (upper === 'HD' || upper === 'HS') return 'H';
+  return elementInfo(t)?.symbol;
 }
 
 /**
