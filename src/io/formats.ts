@@ -4,6 +4,7 @@
  */
 import type { FormatName } from '../model/molecule.js';
 import type { ReadLimits } from './limits.js';
+import { MmcifConsumer } from './mmcif.js';
 import { PdbConsumer } from './pdb.js';
 import type { Conect } from './pdbLine.js';
 import { SdfConsumer } from './sdf.js';
@@ -71,6 +72,14 @@ export const FORMATS: ReadonlyMap<FormatName, FormatSpec> = new Map<FormatName, 
       // AutoDock's torsion tree lines only occur in PDBQT
       sniff: (lines) => (lines.some((l) => /^(ROOT|ENDROOT|BRANCH|TORSDOF)\b/.test(l)) && lines.some((l) => /^(ATOM  |HETATM)/.test(l)) ? 3 : 0),
       consumer: (file, limits, emit, extras) => new PdbConsumer(file, limits, emit, extras.conect, 'pdbqt'),
+    },
+  ],
+  [
+    'mmcif',
+    {
+      extensions: ['.cif', '.mmcif'],
+      sniff: (lines) => (lines.some((l) => l.startsWith('_atom_site.')) ? 3 : lines.some((l) => l.startsWith('data_')) ? 1 : 0),
+      consumer: (file, limits, emit) => new MmcifConsumer(file, limits, emit),
     },
   ],
 ]);
