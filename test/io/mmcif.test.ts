@@ -3,6 +3,10 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { parseText } from '../../src/io/parseText.js';
 import { cifTokens } from '../../src/io/cifTokens.js';
+import { selectAtom, selectRings } from '../../src/perceive/atomSelection.js';
+import { findRings } from '../../src/perceive/findRings.js';
+import { buildGraph } from '../../src/perceive/graph.js';
+import { withBonds } from '../../src/perceive/withBonds.js';
 
 const dir = join(import.meta.dirname, '..', 'data', 'structures');
 /** gemmi 0.5.7's reading of glyco.cif, alternate location A kept (scripts/fixtures/mmcif_gemmi.py). */
@@ -46,5 +50,15 @@ describe('mmCIF', () => {
   it('cifTokens(line) splits quoted values and drops comments', () => {
     expect(cifTokens(`ATOM 1 C "C1'" 'a b' . ? # note`)).toEqual(['ATOM', '1', 'C', "C1'", 'a b', '.', '?']);
     expect(cifTokens(`x ''`)).toEqual(['x', '']);
+  });
+
+  it('selectAtom and selectRings on an mmCIF record: #serial, chain/residue/atom with insertion code, a residue\'s ring', () => {
+    const [raw] = parseText(readFileSync(join(dir, 'glyco.cif'), 'utf8'), { file: 'glyco.cif' });
+    const m = withBonds(raw!);
+    const rings = findRings(buildGraph(m.atoms.length, m.bonds!));
+    expect(selectAtom(m, '#8')).toBe(6); // C1: serial 8, but position 7 since OG B (serial 7) is not kept
+    expect(selectAtom(m, 'A/SER42A/CA')).toBe(1);
+    const [ring] = selectRings(m, 'A/BGC501/', rings);
+    expect(ring!.map((i) => m.atoms[i]!.name).sort()).toEqual(['C1', 'C2', 'C3', 'C4', 'C5', 'O5']);
   });
 });
