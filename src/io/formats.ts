@@ -5,6 +5,7 @@
 import type { FormatName } from '../model/molecule.js';
 import type { ReadLimits } from './limits.js';
 import { MmcifConsumer } from './mmcif.js';
+import { Mol2Consumer } from './mol2.js';
 import { PdbConsumer } from './pdb.js';
 import type { Conect } from './pdbLine.js';
 import { SdfConsumer } from './sdf.js';
@@ -80,6 +81,14 @@ export const FORMATS: ReadonlyMap<FormatName, FormatSpec> = new Map<FormatName, 
       extensions: ['.cif', '.mmcif'],
       sniff: (lines) => (lines.some((l) => l.startsWith('_atom_site.')) ? 3 : lines.some((l) => l.startsWith('data_')) ? 1 : 0),
       consumer: (file, limits, emit) => new MmcifConsumer(file, limits, emit),
+    },
+  ],
+  [
+    'mol2',
+    {
+      extensions: ['.mol2', '.ml2'],
+      sniff: (lines) => (lines.some((l) => l.startsWith('@<TRIPOS>')) ? 3 : 0),
+      consumer: (file, limits, emit) => new Mol2Consumer(file, limits, emit),
     },
   ],
 ]);
