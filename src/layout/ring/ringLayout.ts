@@ -148,7 +148,10 @@ export function layoutRing(placement: RingPlacement, ring: RingAnalysis, mol: Mo
     const t = textBox(text, locantStyle, measure);
     const p = at(a);
     const candidates = aroundCandidates(p.x, p.y, AZ(p.x - cx, p.y - cy), (cut.get(a) ?? 0) + metrics.gap, t, step);
-    addText('ring-locant', text, candidates[firstFree(candidates, obstacles, clearance * 0.8)]!, t, locantStyle, a);
+    // a locant reads as its vertex's only when it is nearer that vertex than any other bond end
+    const others = [...bondEnds].filter(([b]) => b !== a).map(([, pt]) => pt);
+    const picked = pickBondLabel(candidates, obstacles, clearance * 0.8, p, others, Infinity);
+    addText('ring-locant', text, picked.clean ? picked.box : candidates[firstFree(candidates, obstacles, clearance * 0.8)]!, t, locantStyle, a);
   });
 
   // 5. Bounds, caption, shift into positive coordinates.
