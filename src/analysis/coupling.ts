@@ -40,7 +40,7 @@ export interface CouplingOptions {
    * (0–1 → B, 2 → C, 3 → D, 4 → E; see `haasnootSetFor`). Ignored by the Karplus forms.
    */
   readonly haasnootSet?: HaasnootSet | 'auto';
-  /** χ(F) on Huggins' scale. Default 4.00 (parameter listing); 3.90 is the value from memory. */
+  /** χ(F) on Huggins' scale. Default 4.00, alternative 3.90 (both from memory). */
   readonly fluorineElectronegativity?: number;
 }
 

@@ -6,8 +6,8 @@
  * φ is the H–C–C–H torsion; the sum runs over the non-hydrogen substituents of both coupled carbons (not the
  * coupled carbons themselves); Δχ_i is the Huggins electronegativity difference to H, reduced by the
  * β correction Δχ_i = Δχ_α − P7 Σ_β Δχ_β; ξ_i = ±1 is the orientation of the substituent (see
- * `substituentOrientation`). The equation's form is from memory; the parameter sets are [C: a public
- * parameter listing of sets B–E and a second implementation for set A].
+ * `substituentOrientation`). The equation's form is from memory; the parameter sets A–E are the paper's
+ * (not re-checked against its printed table).
  */
 import type { Vec3 } from '../model/molecule.js';
 import { cross, dot, sub, RAD } from '../geometry/vec3.js';
@@ -45,8 +45,8 @@ export function isHaasnootSet(name: string): name is HaasnootSet {
 }
 
 /**
- * The set for a fragment with `count` non-H substituents: 2 → C, 3 → D, 4 or more → E (mapping from the
- * parameter listing, agreeing with memory of the paper; docs/methods.md#haasnoot). For 0 or 1 substituents we use set B,
+ * The set for a fragment with `count` non-H substituents: 2 → C, 3 → D, 4 or more → E (mapping from
+ * memory of the paper; docs/methods.md#haasnoot). For 0 or 1 substituents we use set B,
  * the general set with the β correction, so that every automatic choice applies the β term the way sets C–E
  * do (our choice, common practice, no source). Set A stays available as an explicit choice.
  */
@@ -57,14 +57,14 @@ export function haasnootSetFor(count: number): HaasnootSet {
   return 'e';
 }
 
-/** Huggins electronegativity of F used unless the caller says otherwise: 4.00 (public parameter listing [C]). */
+/** Huggins electronegativity of F used unless the caller says otherwise: 4.00 (from memory; F is not settled). */
 export const FLUORINE_CHI_DEFAULT = 4.0;
 /** The alternative value for F from memory of Huggins 1953: 3.90 (docs/methods.md#haasnoot; F is not settled). */
 export const FLUORINE_CHI_ALTERNATIVE = 3.9;
 
 /**
  * Huggins 1953 (J. Am. Chem. Soc. 75, 4123) electronegativities as docs/methods.md#haasnoot lists them (values from
- * memory and a public parameter listing agree except F and P; P uses the parameter listing's 2.15).
+ * memory; P 2.15).
  */
 const HUGGINS: ReadonlyMap<string, number> = new Map([
   ['H', 2.2], ['C', 2.6], ['N', 3.05], ['O', 3.5], ['Si', 1.9], ['P', 2.15], ['S', 2.6], ['Cl', 3.15],

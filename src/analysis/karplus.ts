@@ -15,7 +15,7 @@ export interface KarplusForm {
 
 /**
  * Karplus 1959 (J. Chem. Phys. 30, 11), two branches: 8.5 cos²φ − 0.28 Hz for |φ| ≤ 90, 9.5 cos²φ − 0.28 Hz
- * above (docs/methods.md#karplus, [C: tutorial page]).
+ * above (docs/methods.md#karplus).
  */
 function karplus1959(torsionDeg: number): number {
   const c = Math.cos(torsionDeg * RAD);

@@ -92,14 +92,14 @@ describe('haasnootSetFor', () => {
 });
 
 describe('hugginsElectronegativity', () => {
-  it('hugginsElectronegativity gives Huggins 1953 values (J. Am. Chem. Soc. 75, 4123; from memory / parameter listing)', () => {
+  it('hugginsElectronegativity gives Huggins 1953 values (J. Am. Chem. Soc. 75, 4123; from memory)', () => {
     expect(['H', 'C', 'N', 'O', 'Cl', 'Br', 'I', 'S', 'Si'].map((e) => hugginsElectronegativity(e))).toEqual([
       2.2, 2.6, 3.05, 3.5, 3.15, 2.95, 2.65, 2.6, 1.9,
     ]);
     expect(hugginsElectronegativity('Xe')).toBeUndefined();
   });
 
-  it('hugginsElectronegativity of F is unsettled: 4.00 by default (parameter listing), 3.90 on request (from memory) — FLAGGED', () => {
+  it('hugginsElectronegativity of F is unsettled: 4.00 by default, 3.90 on request (both from memory) — FLAGGED', () => {
     expect(hugginsElectronegativity('F')).toBe(4.0);
     expect(hugginsElectronegativity('F', FLUORINE_CHI_ALTERNATIVE)).toBe(3.9);
   });
