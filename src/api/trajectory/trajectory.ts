@@ -18,7 +18,7 @@ import { TrajectoryStats, type DwellStats } from '../../analysis/trajectoryStats
 import type { RingShapeOptions } from '../../analysis/ringShape.js';
 import type { FigureFormat } from '../figures/writeFigure.js';
 import type { Theme } from '../../render/theme.js';
-import { openTrajectory, type SourceFrame } from './trajectorySource.js';
+import { openTrajectory, type BinaryFormat, type SourceFrame } from './trajectorySource.js';
 import { TextStream } from './csvStream.js';
 import { TrajectoryRows } from './trajectoryRows.js';
 import { convertTime, parseStartTime, parseTimestep, type Timestep } from './timestep.js';
@@ -58,7 +58,7 @@ export interface TrajectoryOptions extends RingShapeOptions {
   readonly maxAmplitudeDeg?: number;
   /**
    * Periodic box for every frame, `"a b c"` or `"a b c α β γ"` (Å, degrees), or a box object. Default: the
-   * file's own cell (PDB CRYST1) where it has one. With a box, the ring (and each torsion) is made whole by
+   * file's own cell (DCD/XTC/TRR box, GRO box line, PDB CRYST1) where it has one. With a box, the ring (and each torsion) is made whole by
    * the minimum image along its bonds in every frame; without one, a ring bond longer than the bond cut-off
    * stops the run.
    */
@@ -74,7 +74,7 @@ export interface TrajectoryOptions extends RingShapeOptions {
 /** What `analyzeTrajectory` returns (the content of `summary.json` plus the files written). */
 export interface TrajectorySummary {
   readonly schema: 'conformark/trajectory@1';
-  readonly source: { readonly path: string; readonly format: FormatName | 'dcd' | null; readonly topology: string | null };
+  readonly source: { readonly path: string; readonly format: FormatName | BinaryFormat | null; readonly topology: string | null };
   readonly ring: { readonly atoms: readonly number[]; readonly size: number; readonly locants: readonly string[]; readonly referenceRule: string };
   readonly frames: { readonly read: number; readonly analysed: number; readonly first: number; readonly last: number; readonly from: number; readonly to: number | null; readonly stride: number };
   readonly timestep: Timestep | null;
@@ -158,7 +158,7 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
   const csvDescriptor = table.descriptors.map((d) => (d === null ? '' : /[",]/.test(d) ? `"${d.replace(/"/g, '""')}"` : d));
   const v = new PuckerValues();
   const optionBox = typeof options.box === 'string' ? parseBox(options.box) : options.box ?? null;
-  const fileBoxes = !optionBox && !source.binary && first.source.format === 'pdb' ? new FrameBoxes() : null;
+  const fileBoxes = !optionBox && !source.binary && (first.source.format === 'pdb' || first.source.format === 'gro') ? new FrameBoxes() : null;
   const limits = ringBondLimits(first, ring, options.toleranceA);
   let boxedFrames = 0;
   let read = 0;
