@@ -9,7 +9,7 @@ const PIECE = 4 << 20;
 
 export class BinaryStream {
   /** The bytes read; `buffer[at]` is the byte at file offset `offset`. */
-  buffer: Buffer = Buffer.alloc(PIECE);
+  buffer: Buffer;
   /** Index in `buffer` of the next unread byte. */
   at = 0;
   private end = 0;
@@ -21,7 +21,9 @@ export class BinaryStream {
     private readonly fh: FileHandle,
     /** File size in bytes. */
     readonly size: number,
-  ) {}
+  ) {
+    this.buffer = Buffer.alloc(Math.max(64, Math.min(PIECE, size)));
+  }
 
   /** Opens `path` for sequential reading. */
   static async open(path: string): Promise<BinaryStream> {

@@ -9,7 +9,7 @@
  */
 import { ConformarkError } from '../model/errors.js';
 import { BinaryStream } from './binaryStream.js';
-import { readBox, type XdrFrame } from './xtc.js';
+import { MAX_ATOMS, readBox, type XdrFrame } from './xtc.js';
 
 export const TRR_MAGIC = 1993;
 
@@ -47,7 +47,7 @@ function header(b: Buffer, at: number, path: string, where: string): TrrHeader |
   const [ir, e, box, vir, pres, top, sym, x, v, f, atoms, step] = Array.from({ length: 12 }, int) as number[];
   int(); // energy count
   if ([ir, e, top, sym].some((n) => n !== 0)) throw bad(path, `${where}: TRR frames with an input record, energies, topology or symmetry block are not read`);
-  if (!(atoms! > 0)) return `${atoms} atoms`;
+  if (!(atoms! > 0) || atoms! > MAX_ATOMS) return `atom count ${atoms} is not plausible`;
   const real = box! > 0 ? box! / 9 : x! > 0 ? x! / (3 * atoms!) : v! > 0 ? v! / (3 * atoms!) : f! > 0 ? f! / (3 * atoms!) : 4;
   if (real !== 4 && real !== 8) return `block sizes fit neither single nor double precision (box ${box} bytes, positions ${x} bytes, ${atoms} atoms)`;
   if ([x, v, f].some((n) => n !== 0 && n !== 3 * atoms! * real) || [box, vir, pres].some((n) => n !== 0 && n !== 9 * real)) {
@@ -95,7 +95,7 @@ export async function* trrFrames(path: string): AsyncGenerator<XdrFrame> {
         await s.skip(bytes);
         continue;
       }
-      if (!(await s.ensure(h.headerBytes + h.box + h.vir + h.pres + h.x))) throw cut();
+      if (s.remaining < bytes || !(await s.ensure(h.headerBytes + h.box + h.vir + h.pres + h.x))) throw cut();
       if (coords === null) coords = new Float64Array(3 * h.atoms);
       else if (coords.length !== 3 * h.atoms) throw bad(path, `${where} has ${h.atoms} atoms, the first frame had ${coords.length / 3}`);
       const b = s.buffer;

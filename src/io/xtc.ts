@@ -11,6 +11,9 @@ import { decodeXtcCoords } from './xtcCoords.js';
 
 export const XTC_MAGIC = 1995;
 
+/** More atoms than any frame holds: a corrupted count, refused before memory is set aside for it. */
+export const MAX_ATOMS = 100_000_000;
+
 /** One frame of an XDR trajectory (XTC or TRR); `coords` (Å) is reused between frames. */
 export interface XdrFrame {
   readonly index: number;
@@ -71,6 +74,7 @@ export async function* xtcFrames(path: string): AsyncGenerator<XdrFrame> {
       if (magic !== XTC_MAGIC) throw bad(path, `${where}: not an XTC frame (magic number ${magic}, expected ${XTC_MAGIC})`);
       const atoms = b.readInt32BE(at + 4);
       if (!(atoms > 0) || b.readInt32BE(at + 52) !== atoms) throw bad(path, `${where}: broken frame header (atom counts ${atoms} and ${b.readInt32BE(at + 52)})`);
+      if (atoms > MAX_ATOMS) throw bad(path, `${where}: atom count ${atoms} is not plausible`);
       if (index === 1) coords = new Float64Array(3 * atoms);
       else if (3 * atoms !== coords.length) throw bad(path, `${where} has ${atoms} atoms, frame 1 had ${coords.length / 3}`);
       const step = b.readInt32BE(at + 8);
@@ -78,7 +82,7 @@ export async function* xtcFrames(path: string): AsyncGenerator<XdrFrame> {
       let frameBytes: number;
       if (atoms <= 9) {
         frameBytes = 56 + 12 * atoms;
-        if (!(await s.ensure(frameBytes))) throw cut();
+        if (frameBytes > s.remaining || !(await s.ensure(frameBytes))) throw cut();
         b = s.buffer;
         at = s.at;
         for (let k = 0; k < 3 * atoms; k++) coords[k] = b.readFloatBE(at + 56 + 4 * k) * 10;
@@ -89,7 +93,7 @@ export async function* xtcFrames(path: string): AsyncGenerator<XdrFrame> {
         const byteCount = b.readInt32BE(at + 88);
         if (!(byteCount >= 0)) throw bad(path, `${where}: negative byte count ${byteCount}`);
         frameBytes = 92 + 4 * Math.ceil(byteCount / 4);
-        if (!(await s.ensure(frameBytes))) throw cut();
+        if (frameBytes > s.remaining || !(await s.ensure(frameBytes))) throw cut();
         b = s.buffer;
         at = s.at;
         const int = (k: number) => b.readInt32BE(at + 60 + 4 * k);

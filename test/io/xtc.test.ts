@@ -4,6 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { xtcAtomCount, xtcFrames } from '../../src/io/xtc.js';
 import { trrFrames } from '../../src/io/trr.js';
+import fc from 'fast-check';
 import { ConformarkError } from '../../src/model/errors.js';
 
 // written and read back by MDAnalysis 2.4.2 (Michaud-Agrawal et al. 2011, J. Comput. Chem. 32, 2319), checked
@@ -112,5 +113,29 @@ describe('trrFrames', () => {
     writeFileSync(join(dir, 'magic.trr'), bad);
     const e2 = await collect(trrFrames(join(dir, 'magic.trr'))).catch((e: unknown) => e);
     expect((e2 as ConformarkError).issues[0]!.message).toBe(`frame 3 (byte ${frames[2]!.offset}): not a TRR frame (magic number 7, expected 1993)`);
+  });
+});
+
+describe('XDR readers on corrupted files', () => {
+  it('xtcFrames and trrFrames(random byte damage) either read finite coordinates or stop with one error naming the frame', async () => {
+    const files = { xtc: readFileSync(join(FIX, 'rings.xtc')), trr: readFileSync(join(FIX, 'rings.trr')) };
+    let k = 0;
+    await fc.assert(
+      fc.asyncProperty(fc.constantFrom('xtc', 'trr'), fc.array(fc.tuple(fc.nat(), fc.nat(255)), { minLength: 1, maxLength: 6 }), fc.nat(), async (kind, edits, cut) => {
+        const bytes = Buffer.from(files[kind as 'xtc' | 'trr']);
+        for (const [at, v] of edits) bytes[at % bytes.length] = v;
+        const path = join(dir, `fuzz${k++}.${kind}`);
+        writeFileSync(path, cut % 3 === 0 ? bytes.subarray(0, cut % bytes.length) : bytes);
+        try {
+          for await (const f of kind === 'xtc' ? xtcFrames(path) : trrFrames(path)) {
+            if (kind === 'xtc') expect(f.coords.every(Number.isFinite)).toBe(true);
+          }
+        } catch (err) {
+          expect(err).toBeInstanceOf(ConformarkError);
+          expect((err as ConformarkError).issues[0]!.message).toMatch(/frame \d+ \(byte \d+\)|not an? (XTC|TRR) file|too short/);
+        }
+      }),
+      { seed: 16, numRuns: 200 },
+    );
   });
 });
