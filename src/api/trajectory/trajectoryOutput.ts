@@ -1,4 +1,4 @@
-/** Writes `summary.json` and the three trajectory figures (each in every requested format). */
+/** Writes `summary.json` and the three trajectory figures of each ring (each in every requested format). */
 import { join } from 'node:path';
 import { jsonText } from '../jsonText.js';
 import { writeAtomic } from '../../io/writeAtomic.js';
@@ -13,7 +13,7 @@ import { layoutPseudorotationWheel } from '../../layout/plots/pseudorotationWhee
 import { layoutTimeSeries, type SeriesSpec } from '../../layout/plots/timeSeriesLayout.js';
 import { layoutOccupancy } from '../../layout/plots/occupancyLayout.js';
 import type { Timestep } from './timestep.js';
-import type { TrajectorySetup } from './trajectorySetup.js';
+import type { RingSetup } from './trajectorySetup.js';
 import { PHI_THETA_MIN, type TrajectoryPlots } from './trajectoryPlots.js';
 import { SHAPE_ORDER, withTrajectoryRoles } from './trajectoryTheme.js';
 
@@ -46,7 +46,7 @@ export function seriesSpecs(size: number, plots: TrajectoryPlots): SeriesSpec[] 
 }
 
 /** The scenes of a run: map (six- and five-rings only), time series, occupancy. */
-export function trajectoryScenes(summary: { occupancy: Record<string, number>; frames: { analysed: number } }, plots: TrajectoryPlots, setup: TrajectorySetup, theme: Theme, timestep: Timestep | null): Map<string, Scene> {
+export function trajectoryScenes(summary: { occupancy: Record<string, number>; frames: { analysed: number } }, plots: TrajectoryPlots, setup: RingSetup, theme: Theme, timestep: Timestep | null): Map<string, Scene> {
   const metrics = sceneMetrics(theme);
   const common = { metrics, measure: measureText, ringLabel: setup.label };
   const scenes = new Map<string, Scene>();
@@ -58,24 +58,30 @@ export function trajectoryScenes(summary: { occupancy: Record<string, number>; f
   return scenes;
 }
 
-/** Writes summary.json and every figure; returns the paths written, relative to `dir`. */
-export async function writeTrajectoryFiles(
-  dir: string,
-  summary: { occupancy: Record<string, number>; frames: { analysed: number } },
-  plots: TrajectoryPlots,
-  setup: TrajectorySetup,
-  options: TrajectoryFigureOptions,
-): Promise<string[]> {
+/** What the figures of one ring need. */
+export interface RingFigures {
+  readonly summary: { occupancy: Record<string, number>; frames: { analysed: number } };
+  readonly plots: TrajectoryPlots;
+  readonly setup: RingSetup;
+  /** Added to the file names (`-CHX2`), '' for a single ring. */
+  readonly suffix: string;
+}
+
+/** Writes every ring's figures, then summary.json (listing them); returns the paths written, relative to `dir`. */
+export async function writeTrajectoryFiles(dir: string, summary: object, rings: readonly RingFigures[], options: TrajectoryFigureOptions): Promise<string[]> {
   const files = ['summary.json'];
   const theme = withTrajectoryRoles(loadTheme(options.theme));
-  const figures: [string, string][] = [];
-  for (const [name, scene] of trajectoryScenes(summary, plots, setup, theme, options.timestep)) {
-    figures.push([name, renderSvg(scene, theme, { idPrefix: `${name}-` })]);
-  }
-  for (const [name, svg] of figures) {
-    for (const format of options.formats) {
-      await writeFigure(join(dir, `${name}.${format}`), svg, { format, dpi: options.dpi });
-      files.push(`${name}.${format}`);
+  for (const ring of rings) {
+    const figures: [string, string][] = [];
+    for (const [name, scene] of trajectoryScenes(ring.summary, ring.plots, ring.setup, theme, options.timestep)) {
+      const file = `${name}${ring.suffix}`;
+      figures.push([file, renderSvg(scene, theme, { idPrefix: `${file}-` })]);
+    }
+    for (const [name, svg] of figures) {
+      for (const format of options.formats) {
+        await writeFigure(join(dir, `${name}.${format}`), svg, { format, dpi: options.dpi });
+        files.push(`${name}.${format}`);
+      }
     }
   }
   writeAtomic(join(dir, 'summary.json'), jsonText({ ...summary, files: ['puckering.csv', ...files] }));

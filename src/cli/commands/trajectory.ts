@@ -48,7 +48,7 @@ export function registerTrajectory(program: Command): void {
     .command('trajectory')
     .description('ring puckering over every frame of a trajectory: puckering.csv, summary.json and figures in a folder')
     .argument('<file>', 'multi-frame XYZ, GRO, multi-MODEL PDB or multi-record SDF (.gz read transparently), or DCD, XTC or TRR with --topology')
-    .option('--ring <R>', 'ring number as inspect lists it, or an ordered atom list such as 1-2-3-4-5-6 (default 1)')
+    .option('--ring <R>', 'ring number as inspect lists it, an ordered atom list such as 1-2-3-4-5-6, a residue\'s ring(s) A/PRO42/, or name:BGC,NAG for every ring of those residues, each reported separately (default 1)')
     .requiredOption('-d, --dir <dir>', 'output folder (created)')
     .option('--stride <n>', 'analyse every nth frame (default 1)')
     .option('--from <n>', 'first frame to analyse, counted from 1 (default 1)')
@@ -85,8 +85,12 @@ export function registerTrajectory(program: Command): void {
         });
         bar.stop();
         printWarnings(summary.warnings, file);
-        const top = Object.entries(summary.occupancy).sort((a, b) => b[1] - a[1]).map(([s, f]) => `${s} ${(f * 100).toFixed(1)}%`).join(', ');
-        process.stdout.write(`${summary.frames.analysed} frames analysed (${summary.ring.atoms.join('-')}): ${top}\n`);
+        const top = (occupancy: Record<string, number>) => Object.entries(occupancy).sort((a, b) => b[1] - a[1]).map(([s, f]) => `${s} ${(f * 100).toFixed(1)}%`).join(', ');
+        if (summary.rings.length === 1) process.stdout.write(`${summary.frames.analysed} frames analysed (${summary.ring.atoms.join('-')}): ${top(summary.occupancy)}\n`);
+        else {
+          process.stdout.write(`${summary.frames.analysed} frames analysed, ${summary.rings.length} rings:\n`);
+          for (const r of summary.rings) process.stdout.write(`  ${r.tag} (${r.atoms.join('-')}): ${top(r.occupancy)}\n`);
+        }
         process.stdout.write(`wrote ${summary.files.map((f) => `${flags.dir.replace(/\/$/, '')}/${f}`).join(', ')}\n`);
       } finally {
         bar.stop();
