@@ -62,7 +62,7 @@ export class RingTrack {
     this.formStats = new TrajectoryStats({ stride: options.stride, timestep: options.timestep });
     this.plots = new TrajectoryPlots(setup.ring.length, options.maxAmplitudeDeg);
     const catOf = (form: number) => SHAPE_ORDER.indexOf(table.shapeOf(form) as (typeof SHAPE_ORDER)[number]);
-    this.formCat = table.forms.map((_, i) => catOf(i));
+    this.formCat = table.shapes.map((_, i) => catOf(i));
     this.planarCat = catOf(PLANAR_FORM);
     this.puckeredCat = catOf(PUCKERED_FORM);
     this.csvDescriptor = table.descriptors.map((d) => (d === null ? '' : /[",]/.test(d) ? `"${d.replace(/"/g, '""')}"` : d));
@@ -90,7 +90,7 @@ export class RingTrack {
       const what = Number.isFinite(v.Q) ? 'has collinear ring atoms' : 'has non-finite ring atom coordinates';
       throw new ConformarkError({ code: 'degenerate-ring', file: path, line: frame.line || null, message: `frame ${frame.index} ${what}` });
     }
-    const form = table.classify(v.Q, v.q2, v.thetaDeg, v.phaseDeg);
+    const form = table.classify(v.Q, v.q2, v.thetaDeg, v.phaseDeg, kernel.displacements);
     const planar = form === PLANAR_FORM;
     if (planar) this.planarFrames++;
     const shape = table.shapeOf(form);
