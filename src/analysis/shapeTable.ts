@@ -38,6 +38,12 @@ export class ShapeTable {
   private readonly minCos: number;
   /** Medium rings: per form, its unit pattern under every start and direction, `2n` rows of `n`. */
   private readonly unrolled: readonly Float64Array[];
+  /**
+   * After `classify`: cosine of the angle between the frame and the form it returned (great circle on the
+   * Cremer–Pople sphere; the phase difference on the five-ring wheel; the pattern angle of medium rings);
+   * -1 for a planar ring.
+   */
+  nearestCos = -1;
 
   constructor(readonly locants: readonly string[], options: RingShapeOptions = {}) {
     const n = locants.length;
@@ -79,6 +85,7 @@ export class ShapeTable {
   classify(Q: number, q2: number, thetaDeg: number, phaseDeg: number, displacements?: ArrayLike<number>): number {
     const n = this.locants.length;
     const amplitude = n === 5 ? q2 : Q;
+    this.nearestCos = -1;
     if (!(amplitude >= this.planarA)) return PLANAR_FORM;
     if (this.unrolled.length > 0) return displacements ? this.classifyMedium(Q, displacements) : PUCKERED_FORM;
     const k = this.forms.length;
@@ -96,6 +103,7 @@ export class ShapeTable {
         at = i;
       }
     }
+    this.nearestCos = best;
     return best < this.minCos ? PUCKERED_FORM : at;
   }
 
@@ -115,6 +123,7 @@ export class ShapeTable {
         }
       }
     });
+    this.nearestCos = best / Q;
     return best / Q < this.minCos ? PUCKERED_FORM : at;
   }
 

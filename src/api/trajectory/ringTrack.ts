@@ -9,6 +9,7 @@ import { PuckerValues } from '../../geometry/puckerKernel.js';
 import { longRingBond } from '../../geometry/periodicBox.js';
 import { PLANAR_FORM, PUCKERED_FORM } from '../../analysis/shapeTable.js';
 import { TrajectoryStats } from '../../analysis/trajectoryStats.js';
+import { CORE_RADIUS_DEG, CoreSetAssignment } from '../../analysis/coreSetAssignment.js';
 import { TrajectoryPlots } from './trajectoryPlots.js';
 import { SHAPE_ORDER } from './trajectoryTheme.js';
 import { ringBondLimits } from './trajectoryBox.js';
@@ -27,6 +28,10 @@ export interface RingTrackOptions {
   readonly timestep: number | undefined;
   readonly maxAmplitudeDeg: number;
   readonly toleranceA?: number;
+  /** `core` (transition-based, the default) or `frame` (every frame's nearest form is its state). */
+  readonly assignment?: 'core' | 'frame';
+  /** Core radius, degrees; default by ring size (`CORE_RADIUS_DEG`). */
+  readonly coreRadiusDeg?: number;
 }
 
 /** The error for a ring bond longer than the bond cut-off (after the minimum image when there is a box). */
@@ -44,6 +49,12 @@ export class RingTrack {
   readonly stats: TrajectoryStats;
   readonly formStats: TrajectoryStats;
   readonly plots: TrajectoryPlots;
+  /** Transitions and dwell by committed shape and form (core-set assignment), or null for `frame`. */
+  readonly coreStats: TrajectoryStats | null;
+  readonly coreFormStats: TrajectoryStats | null;
+  /** The committed form; inversions counted by it (per frame under `frame`). */
+  readonly assignment: CoreSetAssignment;
+  readonly coreRadiusDeg: number | null;
   planarFrames = 0;
   private readonly limits: Float64Array;
   private readonly formCat: number[];
@@ -67,6 +78,12 @@ export class RingTrack {
     this.puckeredCat = catOf(PUCKERED_FORM);
     this.csvDescriptor = table.descriptors.map((d) => (d === null ? '' : /[",]/.test(d) ? `"${d.replace(/"/g, '""')}"` : d));
     this.limits = ringBondLimits(first, setup.ring, options.toleranceA);
+    const core = (options.assignment ?? 'core') === 'core';
+    this.coreRadiusDeg = core ? options.coreRadiusDeg ?? CORE_RADIUS_DEG[setup.ring.length] ?? 10 : null;
+    this.coreStats = core ? new TrajectoryStats({ stride: options.stride, timestep: options.timestep }) : null;
+    this.coreFormStats = core ? new TrajectoryStats({ stride: options.stride, timestep: options.timestep }) : null;
+    const chairs = new Set(setup.ring.length === 6 ? table.shapes.flatMap((sh, i) => (sh === 'chair' ? [i] : [])) : []);
+    this.assignment = new CoreSetAssignment(this.coreRadiusDeg === null ? -Infinity : Math.cos((this.coreRadiusDeg * Math.PI) / 180), chairs);
   }
 
   /** CSV column names of this ring, with `prefix` (`CHX2_`, or '' for a single ring). */
@@ -113,6 +130,12 @@ export class RingTrack {
     if (form >= 0) rows.text(this.csvDescriptor[form]!);
     this.stats.add(shape);
     this.formStats.add(table.descriptorOf(form) ?? shape);
+    const committed = this.assignment.next(form, table.nearestCos);
+    if (committed >= 0 && this.coreStats) {
+      const sh = table.shapeOf(committed);
+      this.coreStats.add(sh);
+      this.coreFormStats!.add(table.descriptorOf(committed) ?? sh);
+    }
     this.plots.add(frame.index, v, phi, planar, form >= 0 ? this.formCat[form]! : planar ? this.planarCat : this.puckeredCat);
   }
 }

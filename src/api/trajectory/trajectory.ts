@@ -65,6 +65,14 @@ export interface TrajectoryOptions extends RingShapeOptions {
   readonly box?: PeriodicBox | string;
   /** Topology for a coordinate-only trajectory (DCD): a PDB (or SDF/MOL/XYZ) of the same atoms in the same order. */
   readonly topology?: string;
+  /**
+   * How transitions and dwell times are counted: `core` (default) counts a transition only when the ring
+   * enters the core of another form (transition-based assignment); `frame` counts every change between
+   * consecutive analysed frames. Occupancy and counts are per frame either way.
+   */
+  readonly transitions?: 'core' | 'frame';
+  /** Core radius, degrees on the Cremer–Pople sphere (five-rings: of phase). Default 10 (five-rings 6). */
+  readonly coreRadiusDeg?: number;
   /** Reader options (format, limits). */
   readonly read?: ReadOptions;
   /** Called every few thousand frames and at the end with frames read and frames analysed. */
@@ -91,6 +99,25 @@ export interface RingSummary {
     readonly transitions: Readonly<Record<string, Readonly<Record<string, number>>>>;
     readonly dwell: Readonly<Record<string, DwellStats>>;
   };
+  readonly assignment: Assignment;
+  readonly inversions: Inversions | null;
+}
+
+/** How frames were assigned to states for `transitions` and `dwell`. */
+export interface Assignment {
+  /** `core`: a transition is the entry into the core of another form; `frame`: any change between frames. */
+  readonly rule: 'core' | 'frame';
+  /** Core radius, degrees (null under `frame`). */
+  readonly coreRadiusDeg: number | null;
+  /** Analysed frames before the first core was entered (not counted in transitions and dwell). */
+  readonly unassignedFrames: number;
+}
+
+/** Six-ring inversions: changes of committed chair (e.g. 4C1 ↔ 1C4). */
+export interface Inversions {
+  readonly count: number;
+  /** Inversions per ns of analysed time (null without a timestep). */
+  readonly perNs: number | null;
 }
 
 export interface TrajectorySummary {
@@ -113,7 +140,9 @@ export interface TrajectorySummary {
     readonly transitions: Readonly<Record<string, Readonly<Record<string, number>>>>;
     readonly dwell: Readonly<Record<string, DwellStats>>;
   };
-  /** Every followed ring (the top-level `ring`, `occupancy` … `forms` repeat the first). */
+  readonly assignment: Assignment;
+  readonly inversions: Inversions | null;
+  /** Every followed ring (the top-level `ring`, `occupancy` … `inversions` repeat the first). */
   readonly rings: readonly RingSummary[];
   readonly torsions: readonly string[];
   readonly warnings: readonly Warning[];
@@ -150,7 +179,12 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
   const timestep: Timestep | null = given ?? (source.timestepPs !== null ? { value: +source.timestepPs.toPrecision(9), unit: 'ps' } : null);
   const setup = trajectorySetup(first, { ...options, ring: options.ring ?? '1', torsions: options.torsions ?? [] });
   const { torsions } = setup;
-  const tracks = setup.rings.map((r) => new RingTrack(r, first, { stride, timestep: timestep?.value, maxAmplitudeDeg: options.maxAmplitudeDeg ?? 60, toleranceA: options.toleranceA }));
+  const rule = options.transitions ?? 'core';
+  if (rule !== 'core' && rule !== 'frame') throw usageError('bad-option', `--transitions expects core or frame, got "${String(rule)}"`);
+  const radius = options.coreRadiusDeg;
+  if (radius !== undefined && !(radius > 0 && radius < 90)) throw usageError('bad-option', `--core-radius expects degrees between 0 and 90, got ${radius}`);
+  const trackOptions = { stride, timestep: timestep?.value, maxAmplitudeDeg: options.maxAmplitudeDeg ?? 60, toleranceA: options.toleranceA, assignment: rule, coreRadiusDeg: radius };
+  const tracks = setup.rings.map((r) => new RingTrack(r, first, trackOptions));
   const several = tracks.length > 1;
   const startGiven = typeof options.startTime === 'string' ? parseStartTime(options.startTime) : options.startTime ?? null;
   const start = !timestep ? 0 : startGiven ? convertTime(startGiven.value, startGiven.unit, timestep.unit) : source.startPs !== null ? convertTime(source.startPs, 'ps', timestep.unit) : 0;
@@ -235,7 +269,10 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
     if (t.plots.clamped > 0) warnings.push({ code: 'amplitude-beyond-wheel', message: `${t.plots.clamped} frames have τm${of} beyond ${options.maxAmplitudeDeg ?? 60}°: drawn at the rim of the wheel` });
     const st = t.stats.summary();
     const fs = t.formStats.summary();
+    const ct = t.coreStats?.summary() ?? st;
+    const cf = t.coreFormStats?.summary() ?? fs;
     const r = t.setup;
+    const spanNs = timestep ? convertTime(analysed * stride * timestep.value, timestep.unit, 'ns') : 0;
     return {
       tag: r.tag,
       label: r.label,
@@ -246,9 +283,11 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
       referenceRule: r.referenceRule,
       occupancy: st.occupancy,
       counts: st.counts,
-      transitions: st.transitions,
-      dwell: st.dwell,
-      forms: { occupancy: fs.occupancy, transitions: fs.transitions, dwell: fs.dwell },
+      transitions: ct.transitions,
+      dwell: ct.dwell,
+      forms: { occupancy: fs.occupancy, transitions: cf.transitions, dwell: cf.dwell },
+      assignment: { rule, coreRadiusDeg: t.coreRadiusDeg, unassignedFrames: t.coreStats ? t.assignment.unassigned : 0 },
+      inversions: r.ring.length === 6 ? { count: t.assignment.inversions, perNs: spanNs > 0 ? t.assignment.inversions / spanNs : null } : null,
     };
   });
   const one = rings[0]!;
@@ -265,6 +304,8 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
     transitions: one.transitions,
     dwell: one.dwell,
     forms: one.forms,
+    assignment: one.assignment,
+    inversions: one.inversions,
     rings,
     torsions: setup.torsionColumns,
     warnings,

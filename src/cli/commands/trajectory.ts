@@ -14,6 +14,8 @@ interface TrajectoryFlags {
   box?: string;
   startTime?: string[];
   topology?: string;
+  transitions?: string;
+  coreRadius?: string;
   torsion?: string[];
   formats?: string;
   theme?: string;
@@ -57,6 +59,8 @@ export function registerTrajectory(program: Command): void {
     .option('--start-time <value...>', 'time of frame 1 with a unit, e.g. "10 ns" (default: from the file where it has it, else 0)')
     .option('--topology <file>', 'atoms of a coordinate-only trajectory (DCD, XTC, TRR): a PDB or GRO of the same system, same atom order')
     .option('--box <cell>', 'periodic box "a b c" or "a b c alpha beta gamma" (Å, degrees); default the file\'s cell (DCD/XTC/TRR box, GRO box line, PDB CRYST1)')
+    .option('--transitions <rule>', 'core: a transition is the entry into the core of another form (default); frame: every change between frames')
+    .option('--core-radius <deg>', 'core radius around each canonical form, degrees on the Cremer–Pople sphere (default 10; five-rings 6)')
     .option('--torsion <A-B-C-D...>', 'torsions to add as CSV columns (numbers from 1 or atom names); repeatable')
     .option('--formats <list>', 'figure formats, comma-separated: svg, png, pdf (default svg)')
     .option('--dpi <n>', DPI_HELP)
@@ -77,6 +81,8 @@ export function registerTrajectory(program: Command): void {
           box: flags.box,
           startTime: flags.startTime?.join(' '),
           topology: flags.topology,
+          transitions: oneOf('--transitions', flags.transitions, ['core', 'frame'] as const, 'core'),
+          coreRadiusDeg: flags.coreRadius === undefined ? undefined : Number(flags.coreRadius),
           formats: formats(flags.formats),
           theme: flags.theme,
           dpi: dpiOption(flags.dpi),
