@@ -10,6 +10,7 @@ import { withFlatInputWarning } from '../flatInput.js';
 import { findEnergy, type EnergyOptions } from '../../io/energy.js';
 import { recordReport, type RecordReport, type RecordReportOptions } from '../../analysis/recordReport.js';
 import { prepareRecord } from '../prepare.js';
+import type { RingScopeOptions } from '../../perceive/ringScope.js';
 import { heldRecords, type HoldOptions } from '../holdLimits.js';
 
 /** Options of `inspectFile` / `inspectMolecule`. */
@@ -22,6 +23,8 @@ export interface InspectOptions extends RecordReportOptions {
   readonly toleranceA?: number;
   /** Caps on what the report holds: records and atoms over all records (defaults 100,000 and 2,000,000). */
   readonly hold?: HoldOptions;
+  /** Which rings are analysed: chelate rings, disulfide loops, the size limit (defaults: none, none, 12). */
+  readonly ringScope?: RingScopeOptions;
 }
 
 /** The whole report. */
@@ -36,8 +39,8 @@ export interface InspectReport {
  * @example inspectMolecule(mol).rings[0]?.descriptor // '4C1'
  */
 export function inspectMolecule(mol: Molecule, options: InspectOptions = {}): RecordReport {
-  const { molecule, graph, rings } = prepareRecord(mol, { toleranceA: options.toleranceA });
-  const report = recordReport(molecule, graph, rings, options);
+  const { molecule, graph, rings, setAside } = prepareRecord(mol, { toleranceA: options.toleranceA, ...options.ringScope });
+  const report = recordReport(molecule, graph, rings, options, setAside);
   const energy = findEnergy(molecule, options.energy);
   const warnings: Warning[] = [...report.warnings];
   if (energy?.warning) warnings.push(energy.warning);

@@ -27,16 +27,19 @@ function atomLabel(record: RecordReport, id: number): string {
 function recordText(record: RecordReport): string {
   const perceived = record.bonds.some((b) => b.perceived);
   const nr = record.rings.length;
+  const metal = record.bonds.filter((b) => b.coordination).length;
+  const aside = record.setAsideRings.length;
   const facts = [
     `${record.atoms.length} atoms`,
-    `${record.bonds.length} bonds ${perceived ? 'perceived from coordinates' : 'from the file'}`,
-    `${nr} ring${nr === 1 ? '' : 's'}`,
+    `${record.bonds.length} bonds ${perceived ? 'perceived from coordinates' : 'from the file'}${metal > 0 ? ` (${metal} to metals)` : ''}`,
+    `${nr} ring${nr === 1 ? '' : 's'}${aside > 0 ? ` (+${aside} not analysed)` : ''}`,
   ];
   if (record.energy) facts.push(`energy ${record.energy.value} ${record.energy.unit ?? '(unit unknown)'} (${record.energy.field})`);
   // titles come from files: no terminal control sequences, bounded length
   const title = safeText(record.title).text;
   const lines = [`record ${record.index}${title ? `  "${title}"` : ''}`, `  ${facts.join(' · ')}`];
   for (const ring of record.rings) lines.push(...ringText(record, ring));
+  for (const ring of record.setAsideRings) lines.push(`  not analysed: ${ring.message}`);
   if (record.couplings && record.couplings.length > 0) {
     const method = record.couplings[0]!.method;
     lines.push(`  ³J(H,H) predictions, ${COUPLING_METHOD_NAMES.get(method) ?? method} (estimates, typical error about 1 Hz)`);
