@@ -4,7 +4,9 @@
  */
 import type { Molecule } from '../model/molecule.js';
 import { usageError } from '../model/errors.js';
-import { readRecords, type StreamOptions } from '../io/readRecords.js';
+import type { StreamOptions } from '../io/readRecords.js';
+import { ConformarkError } from '../model/errors.js';
+import { recordOutcomes } from './recordStream.js';
 import { withBonds } from '../perceive/withBonds.js';
 import { buildGraph, type Graph } from '../perceive/graph.js';
 import { findRings } from '../perceive/findRings.js';
@@ -45,14 +47,28 @@ export function prepareRecord(mol: Molecule, options: PrepareOptions = {}): Prep
 }
 
 /**
- * Record `n` (counted from 1) of a file, read lazily so a long file is not parsed past it.
+ * Record `n` (counted from 1) of a file, read lazily so a long file is not parsed past it. A bad record
+ * before `n` is read past (bad records count in the numbering); only record `n` itself being bad, or a
+ * problem that stops reading the file, throws.
  * @example const mol = await readRecord('conformers.sdf', 3)
  */
 export async function readRecord(path: string, n = 1, options: StreamOptions = {}): Promise<Molecule> {
   let count = 0;
-  for await (const mol of readRecords(path, options)) {
-    if (++count === n) return mol;
+  const bad: { code: string; file: string; line: number | null; message: string }[] = [];
+  for await (const outcome of recordOutcomes(path, options)) {
+    if ('molecule' in outcome) {
+      if (bad.length > 0) break;
+      count = outcome.molecule.source.index;
+      if (count === n) return outcome.molecule;
+      continue;
+    }
+    const { record, code, file, line, message } = outcome.error;
+    if (record === null || record === n) bad.push({ code, file, line, message });
+    else if (bad.length > 0) break;
+    if (record === null) break;
+    count = record;
   }
+  if (bad.length > 0) throw new ConformarkError(bad);
   const what = `record ${n} does not exist (the file has ${count} record${count === 1 ? '' : 's'})`;
   throw usageError('no-record', what, path);
 }

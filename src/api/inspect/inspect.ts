@@ -4,14 +4,16 @@
  */
 import type { FormatName, Molecule } from '../../model/molecule.js';
 import type { Warning } from '../../model/errors.js';
-import { readRecords, type StreamOptions } from '../../io/readRecords.js';
+import type { StreamOptions } from '../../io/readRecords.js';
+import { ConformarkError } from '../../model/errors.js';
+import { recordOutcomes, type RecordError } from '../recordStream.js';
 import { detectFormat } from '../../io/detectFormat.js';
 import { withFlatInputWarning } from '../flatInput.js';
 import { findEnergy, type EnergyOptions } from '../../io/energy.js';
 import { recordReport, type RecordReport, type RecordReportOptions } from '../../analysis/recordReport.js';
 import { prepareRecord } from '../prepare.js';
 import type { RingScopeOptions } from '../../perceive/ringScope.js';
-import { heldRecords, type HoldOptions } from '../holdLimits.js';
+import { holdCounter, type HoldOptions } from '../holdLimits.js';
 
 /** Options of `inspectFile` / `inspectMolecule`. */
 export interface InspectOptions extends RecordReportOptions {
@@ -32,6 +34,8 @@ export interface InspectReport {
   schema: 'conformark/report@1';
   source: { path: string; format: FormatName };
   records: RecordReport[];
+  /** Bad records read past (the others are analysed), in file order; empty when every record was good. */
+  errors: RecordError[];
 }
 
 /**
@@ -52,17 +56,35 @@ export function inspectMolecule(mol: Molecule, options: InspectOptions = {}): Re
 }
 
 /**
- * Report of every record of a file (`-` for standard input), read as a stream.
+ * Report of every record of a file (`-` for standard input), read as a stream. A bad record (one the reader
+ * or the bond perception refuses) is listed in `errors` and the others are analysed; when no record is good
+ * at all, or reading cannot go on (binary data, an over-long line), the problems are thrown as one
+ * `ConformarkError`.
  * @example (await inspectFile('conformers.sdf')).records.length
  */
 export async function inspectFile(path: string, options: InspectOptions = {}): Promise<InspectReport> {
   const records: RecordReport[] = [];
+  const errors: RecordError[] = [];
   const flat = { warned: false };
+  const hold = holdCounter(path, options.hold);
   let format: FormatName | null = options.read?.format ?? null;
-  for await (const mol of heldRecords(readRecords(path, options.read), path, options.hold)) {
+  for await (const outcome of recordOutcomes(path, options.read)) {
+    if ('error' in outcome) {
+      if (outcome.error.record === null) throw new ConformarkError(outcome.error);
+      errors.push(outcome.error);
+      continue;
+    }
+    const mol = outcome.molecule;
+    hold.add(mol);
     format ??= mol.source.format;
-    const report = inspectMolecule(mol, options);
-    records.push({ ...report, warnings: withFlatInputWarning(mol, report.warnings, flat) });
+    try {
+      const report = inspectMolecule(mol, options);
+      records.push({ ...report, warnings: withFlatInputWarning(mol, report.warnings, flat) });
+    } catch (err) {
+      if (!(err instanceof ConformarkError)) throw err;
+      for (const i of err.issues) errors.push({ record: mol.source.index, code: i.code, file: i.file || path, line: i.line ?? mol.source.line, message: `record ${mol.source.index}: ${i.message}` });
+    }
   }
-  return { schema: 'conformark/report@1', source: { path, format: format ?? detectFormat(path) }, records };
+  if (records.length === 0 && errors.length > 0) throw new ConformarkError(errors.map(({ code, file, line, message }) => ({ code, file, line, message })));
+  return { schema: 'conformark/report@1', source: { path, format: format ?? detectFormat(path) }, records, errors };
 }

@@ -1,6 +1,6 @@
 /** `conformark inspect FILE`: per-record summary of rings, shapes, positions and torsions; `--json` report. */
 import type { Command } from 'commander';
-import { COUPLING_METHODS, inspectFile, inspectText, jsonText, protectInput, writeAtomic, type CouplingMethod } from '../../index.js';
+import { COUPLING_METHODS, formatIssue, inspectFile, inspectText, jsonText, protectInput, safeText, writeAtomic, type CouplingMethod } from '../../index.js';
 import { finiteNumber, limitsOf, ringScopeOf, oneOf, printWarnings } from '../options.js';
 
 /** Warnings printed on stderr before the rest are only counted (a trajectory can raise thousands). */
@@ -52,5 +52,8 @@ export function registerInspect(program: Command): void {
       const text = flags.json ? jsonText(report) : inspectText(report);
       if (flags.output) writeAtomic(flags.output, text);
       else process.stdout.write(text);
+      // bad records were read past: each is one line on stderr, and the run ends with exit 1
+      for (const e of report.errors) process.stderr.write(`conformark: ${safeText(formatIssue(e), 1000).text}\n`);
+      if (report.errors.length > 0) process.exitCode = 1;
     });
 }
