@@ -157,7 +157,11 @@ export { isTrigonalAtom, isTrigonalRing, trigonalAtoms } from './perceive/trigon
 // shared record preparation (integrator)
 export { prepareRecord, readRecord } from './api/prepare.js';
 export { FLAT_INPUT_WARNING, isTwoDimensional } from './api/flatInput.js';
-export type { PreparedRecord } from './api/prepare.js';
+export type { PreparedRecord, PrepareOptions } from './api/prepare.js';
+export { DEFAULT_MAX_RING_SIZE, isCoordinationBond, ringClosingBonds, scopeRings } from './perceive/ringScope.js';
+export type { RingScopeOptions, SetAsideRing, SetAsideReason } from './perceive/ringScope.js';
+export { isMetal } from './model/elements.js';
+export { METAL_TOLERANCE_A } from './perceive/perceiveBonds.js';
 // inspect (integrator)
 export { inspectFile, inspectMolecule } from './api/inspect/inspect.js';
 export type { InspectOptions, InspectReport } from './api/inspect/inspect.js';

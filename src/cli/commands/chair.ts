@@ -17,7 +17,7 @@ import {
   type RingView,
   jsonText,
 } from '../../index.js';
-import { finiteNumber, limitsOf, oneOf, printWarnings, wholeNumber, DPI_HELP, dpiOption } from '../options.js';
+import { finiteNumber, limitsOf, ringScopeOf, oneOf, printWarnings, wholeNumber, DPI_HELP, dpiOption } from '../options.js';
 
 interface ChairFlags {
   ring?: string;
@@ -56,7 +56,7 @@ export function registerChair(program: Command): void {
       const { read } = limitsOf(command);
       if (flags.output) protectInput(file);
       const recordNumber = wholeNumber('--record', flags.record ?? '1');
-      const { molecule, graph, rings } = prepareRecord(await readRecord(file, recordNumber, read));
+      const { molecule, graph, rings } = prepareRecord(await readRecord(file, recordNumber, read), ringScopeOf(command));
       // `--ring 1,2`: fused chairs of those rings
       const fused = flags.ring !== undefined && /^\s*\d+(\s*,\s*\d+)+\s*$/.test(flags.ring) ? flags.ring.split(',').map((n) => Number(n)) : undefined;
       const ordered = flags.ring !== undefined && !fused && ringTokenKind(flags.ring) === 'atoms';
