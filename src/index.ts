@@ -12,6 +12,7 @@ export { klynePrelog, torsionRelation } from './geometry/klynePrelog.js';
 export type { KlynePrelog, TorsionRelation } from './geometry/klynePrelog.js';
 export { wrap180, wrap360 } from './geometry/vec3.js';
 export { writeAtomic, protectInput } from './io/writeAtomic.js';
+export { abandonOutputs } from './io/abandonOutputs.js';
 export { buildGraph } from './perceive/graph.js';
 export type { Graph } from './perceive/graph.js';
 export {

@@ -4,12 +4,11 @@
  * reported (manifest `errors`, and in the result for stderr) and the rest is written.
  */
 import { availableParallelism } from 'node:os';
-import { join } from 'node:path';
 import { ConformarkError, type Warning } from '../../model/errors.js';
 import type { Molecule } from '../../model/molecule.js';
 import type { StreamOptions } from '../../io/readRecords.js';
 import type { HoldOptions } from '../holdLimits.js';
-import { writeAtomic } from '../../io/writeAtomic.js';
+import { OutputFolder, type ManifestKind } from '../../io/outputFolder.js';
 import type { BondSet } from '../../analysis/figureBonds.js';
 import type { CouplingOptions } from '../../analysis/coupling.js';
 import type { EnergyOptions } from '../../io/energy.js';
@@ -25,7 +24,6 @@ import { figureBytes, type FigureFormat } from '../figures/writeFigure.js';
 import { supportTables } from '../tables/supportTables.js';
 import { TABLE_WRITERS, fixed, type TableFormat } from '../tables/tableText.js';
 import { jsonText } from '../jsonText.js';
-import { previousOutputs, removeStale } from './staleOutputs.js';
 
 /** Options of {@link batchFile}. */
 export interface BatchOptions {
@@ -95,6 +93,13 @@ interface Planned extends FigureJob {
 
 const one = (a: number) => a + 1;
 
+/** How `manifest.json` lists what a batch wrote. */
+export const BATCH_MANIFEST: ManifestKind = {
+  name: 'manifest.json',
+  schema: 'conformark/batch@1',
+  files: (doc) => [...(Array.isArray(doc.figures) ? doc.figures : [null]), ...(Array.isArray(doc.tables) ? doc.tables : [null])].map((e) => (e as { path?: unknown } | null)?.path),
+};
+
 /** Figures of one record, in order: Newman per drawn bond, then one ring figure per ring. */
 function plan(a: RecordAnalysis, width: number, prefix: string, lowest: number | null, rings: boolean): Planned[] {
   const label = recordLabel(a.record, width);
@@ -121,8 +126,17 @@ function plan(a: RecordAnalysis, width: number, prefix: string, lowest: number |
  * @example const { manifest } = await batchFile('conformers.sdf', 'si-figures', { bonds: 'rotatable' })
  */
 export async function batchFile(path: string, dir: string, options: BatchOptions = {}): Promise<BatchResult> {
-  const previous = previousOutputs(dir, 'conformark/batch@1');
   const theme = loadTheme(options.theme);
+  const folder = OutputFolder.open(dir, BATCH_MANIFEST);
+  try {
+    return await batchInto(folder, path, theme, options);
+  } catch (err) {
+    folder.abort();
+    throw err;
+  }
+}
+
+async function batchInto(folder: OutputFolder, path: string, theme: Theme, options: BatchOptions): Promise<BatchResult> {
   const formats = options.formats ?? ['svg'];
   const prefix = options.idPrefix ?? '';
   const notes: string[] = [];
@@ -174,7 +188,7 @@ export async function batchFile(path: string, dir: string, options: BatchOptions
       const fig = drawn[k]![j]!;
       for (const format of formats) {
         const file = `${job.stem}.${format}`;
-        writeAtomic(join(dir, file), format === 'svg' ? `${fig.svg}\n` : fig.files.find((f) => f.format === format)!.data);
+        folder.write(file, format === 'svg' ? `${fig.svg}\n` : fig.files.find((f) => f.format === format)!.data);
         figures.push({ record: job.record, kind: job.kind, bond: job.manifestBond, ring: job.manifestRing, path: file });
       }
       panels.push({ svg: fig.svg, width: fig.width, height: fig.height, caption: job.caption });
@@ -190,7 +204,7 @@ export async function batchFile(path: string, dir: string, options: BatchOptions
       });
       for (const format of formats) {
         const file = `sheet-${s + 1}.${format}`;
-        writeAtomic(join(dir, file), await figureBytes(svg, format));
+        folder.write(file, await figureBytes(svg, format));
         figures.push({ record: null, kind: 'sheet', bond: null, ring: null, path: file });
       }
     }
@@ -203,7 +217,7 @@ export async function batchFile(path: string, dir: string, options: BatchOptions
     for (const table of supportTables(analysed.map((r) => r.analysis))) {
       for (const format of tableFormats) {
         const file = `${table.kind}.${format}`;
-        writeAtomic(join(dir, file), TABLE_WRITERS.get(format)!(table));
+        folder.write(file, TABLE_WRITERS.get(format)!(table));
         tables.push({ kind: table.kind, format, path: file });
       }
     }
@@ -214,7 +228,6 @@ export async function batchFile(path: string, dir: string, options: BatchOptions
     tables,
     errors: errors.map(({ record, code, line, message }) => ({ record, code, line, message })),
   };
-  writeAtomic(join(dir, 'manifest.json'), jsonText(manifest));
-  removeStale(dir, previous, new Set([...figures, ...tables].map((f) => f.path)));
+  folder.commit(jsonText(manifest));
   return { manifest, errors, warnings, notes };
 }

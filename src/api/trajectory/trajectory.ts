@@ -3,12 +3,12 @@
  * bonds, ring and numbering; each analysed frame then costs one Cremer–Pople kernel call, one shape lookup, a
  * CSV line and a few counters. Writes `puckering.csv`, `summary.json` and the figures into a folder.
  */
-import { resolve } from 'node:path';
 import { ConformarkError, ParseError, usageError, type Warning } from '../../model/errors.js';
-import type { FormatName } from '../../model/molecule.js';
+import type { FormatName, Molecule } from '../../model/molecule.js';
 import { readFrames, type Frame } from '../../io/readFrames.js';
 import type { ReadOptions } from '../../io/limits.js';
 import { protectInput } from '../../io/writeAtomic.js';
+import { OutputFolder, type ManifestKind } from '../../io/outputFolder.js';
 import { PHASE_THRESHOLD } from '../../geometry/cremerPople.js';
 import { PuckerValues } from '../../geometry/puckerKernel.js';
 import { torsionAt } from '../../geometry/torsionAt.js';
@@ -21,7 +21,7 @@ import { readRecord } from '../prepare.js';
 import { TextStream } from './csvStream.js';
 import { TrajectoryRows } from './trajectoryRows.js';
 import { parseTimestep, type Timestep } from './timestep.js';
-import { trajectorySetup } from './trajectorySetup.js';
+import { trajectorySetup, type TrajectorySetup } from './trajectorySetup.js';
 import { TrajectoryPlots } from './trajectoryPlots.js';
 import { SHAPE_ORDER } from './trajectoryTheme.js';
 import { writeTrajectoryFiles } from './trajectoryOutput.js';
@@ -79,6 +79,13 @@ export interface TrajectorySummary {
   readonly files: readonly string[];
 }
 
+/** How `summary.json` lists what a trajectory run wrote. */
+export const TRAJECTORY_MANIFEST: ManifestKind = {
+  name: 'summary.json',
+  schema: 'conformark/trajectory@1',
+  files: (doc) => (Array.isArray(doc.files) ? doc.files : [null]).filter((f) => f !== 'summary.json'),
+};
+
 function frameIssue(path: string, frame: Frame, code: string, message: string): ConformarkError {
   return new ConformarkError({ code, file: path, line: frame.line, message: `frame ${frame.index} ${message}` });
 }
@@ -105,11 +112,29 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
   // 2. Frame 1 fixes bonds, ring, numbering and torsions.
   const first = await readRecord(path, 1, options.read);
   const setup = trajectorySetup(first, { ...options, ring: options.ring ?? '1', torsions: options.torsions ?? [] });
+  const folder = OutputFolder.open(options.dir, TRAJECTORY_MANIFEST);
+  try {
+    return await analyseInto(folder, path, first, setup, { ...options, stride, from, to, timestep });
+  } catch (err) {
+    folder.abort();
+    throw err;
+  }
+}
+
+interface Resolved extends Omit<TrajectoryOptions, 'timestep'> {
+  readonly stride: number;
+  readonly from: number;
+  readonly to: number;
+  readonly timestep: Timestep | null;
+}
+
+async function analyseInto(folder: OutputFolder, path: string, first: Molecule, setup: TrajectorySetup, options: Resolved): Promise<TrajectorySummary> {
+  const { stride, from, to, timestep } = options;
   const { ring, kernel, table, torsions } = setup;
   const n = ring.length;
   const maxRingAtom = Math.max(...ring, ...torsions.flat());
-  const dir = resolve(options.dir);
-  const csv = new TextStream(resolve(dir, 'puckering.csv'));
+  const csv = new TextStream(folder.path('puckering.csv'));
+  folder.adopt('puckering.csv', csv.temporary);
   const timeColumn = timestep ? [`time_${timestep.unit}`] : [];
   const fiveColumns = n === 5 ? ['P', 'tauM'] : [];
   csv.write(`${['frame', ...timeColumn, 'Q', 'thetaDeg', 'phiDeg', ...fiveColumns, 'shape', 'descriptor', ...setup.torsionColumns].join(',')}\n`);
@@ -200,7 +225,7 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
       throw usageError('no-frames', `no frames to analyse ${range}: the file has ${read} frame${read === 1 ? '' : 's'}`, path);
     }
     rows.flush();
-    csv.commit();
+    csv.finish();
   } catch (err) {
     csv.abort();
     await it.return?.(undefined);
@@ -226,6 +251,6 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
     torsions: setup.torsionColumns,
     warnings,
   };
-  const files = await writeTrajectoryFiles(dir, summary, plots, setup, { formats: options.formats ?? ['svg'], theme: options.theme, timestep });
+  const files = await writeTrajectoryFiles(folder, summary, plots, setup, { formats: options.formats ?? ['svg'], theme: options.theme, timestep });
   return { ...summary, files: ['puckering.csv', ...files] };
 }

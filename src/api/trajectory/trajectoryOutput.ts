@@ -1,8 +1,7 @@
 /** Writes `summary.json` and the three trajectory figures (each in every requested format). */
-import { join } from 'node:path';
 import { jsonText } from '../jsonText.js';
-import { writeAtomic } from '../../io/writeAtomic.js';
-import { writeFigure, type FigureFormat } from '../figures/writeFigure.js';
+import type { OutputFolder } from '../../io/outputFolder.js';
+import { figureBytes, type FigureFormat } from '../figures/writeFigure.js';
 import { loadTheme, sceneMetrics } from '../../render/themes.js';
 import { renderSvg } from '../../render/renderSvg.js';
 import { measureText } from '../../render/svgWindow.js';
@@ -51,9 +50,12 @@ export function trajectoryScenes(summary: { occupancy: Record<string, number>; f
   return scenes;
 }
 
-/** Writes summary.json and every figure; returns the paths written, relative to `dir`. */
+/**
+ * Writes every figure and then commits the folder with summary.json as its manifest (so the figures, the CSV
+ * and the summary appear together); returns the paths written, relative to the folder.
+ */
 export async function writeTrajectoryFiles(
-  dir: string,
+  folder: OutputFolder,
   summary: { occupancy: Record<string, number>; frames: { analysed: number } },
   plots: TrajectoryPlots,
   setup: TrajectorySetup,
@@ -67,10 +69,10 @@ export async function writeTrajectoryFiles(
   }
   for (const [name, svg] of figures) {
     for (const format of options.formats) {
-      await writeFigure(join(dir, `${name}.${format}`), svg, { format });
+      folder.write(`${name}.${format}`, await figureBytes(svg, format));
       files.push(`${name}.${format}`);
     }
   }
-  writeAtomic(join(dir, 'summary.json'), jsonText({ ...summary, files: ['puckering.csv', ...files] }));
+  folder.commit(jsonText({ ...summary, files: ['puckering.csv', ...files] }));
   return files;
 }
