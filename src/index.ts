@@ -45,6 +45,7 @@ export {
   COUPLING_METHOD_SHORT_NAMES,
   couplingsAcrossBond,
   isSkippedCoupling,
+  noHydrogenWarning,
   ringCouplings,
   toCouplingJson,
   vicinalCoupling,
@@ -76,8 +77,8 @@ export type { DuplicateOptions } from './analysis/duplicates.js';
 export { torsionFingerprint, compareTorsionFingerprints } from './analysis/torsionFingerprint.js';
 export type { FingerprintDifference, TorsionAtoms } from './analysis/torsionFingerprint.js';
 // rings (area C): ring reference order, canonical forms, shape and descriptor, substituents, pseudorotation
-export { altonaSundaralingam, fourierPseudorotation } from './geometry/pseudorotation.js';
-export type { Pseudorotation } from './geometry/pseudorotation.js';
+export { altonaSundaralingam, altonaSundaralingamFit, fourierPseudorotation, leastSquaresAmplitude } from './geometry/pseudorotation.js';
+export type { AltonaSundaralingamFit, AmplitudeMethod, Pseudorotation } from './geometry/pseudorotation.js';
 export { ringReference } from './analysis/ringReference.js';
 export type { RingReference, RingReferenceOptions } from './analysis/ringReference.js';
 export {
@@ -101,6 +102,8 @@ export type {
   RingPuckering,
   PseudorotationMethod,
 } from './analysis/ringAnalysis.js';
+export { chemicalNumbering } from './analysis/chemicalNumbering.js';
+export type { ChemicalNumbering } from './analysis/chemicalNumbering.js';
 export { toReportRing } from './analysis/ringReport.js';
 export type { ReportRing } from './analysis/ringReport.js';
 // build (area F): SD writer and 3D conformers from SMILES
@@ -119,10 +122,13 @@ export type { NewmanAngles } from './layout/newman/newmanAngles.js';
 export type { NewmanLabels } from './layout/text/atomLabelText.js';
 export { torsionArcPath } from './layout/newman/torsionArc.js';
 export { approximateMeasure, textStyle, DEFAULT_METRICS } from './layout/scene.js';
-export type { Scene, SceneItem, SceneLine, ScenePath, SceneCircle, SceneText, SceneMetrics, TextMeasure, TextStyle, FontWeight } from './layout/scene.js';
+export type { Scene, SceneItem, SceneLine, ScenePath, SceneCircle, SceneText, SceneMetrics, TextMeasure, TextRun, TextStyle, FontWeight } from './layout/scene.js';
+export { figureLegibility, textItemBox } from './layout/text/figureLegibility.js';
+export type { Legibility, LegibilityCounts, LegibilityOptions, LegibilityProblem } from './layout/text/figureLegibility.js';
+export { textRuns, runsText, MIN_TEXT_SIZE } from './layout/text/textRuns.js';
 export { renderSvg } from './render/renderSvg.js';
 export type { RenderSvgOptions } from './render/renderSvg.js';
-export { renderPng } from './render/renderPng.js';
+export { renderPng, pngResolution, DEFAULT_DPI } from './render/renderPng.js';
 export type { RenderPngOptions } from './render/renderPng.js';
 export { renderPdf, svgSizePt } from './render/renderPdf.js';
 export { measureText } from './render/svgWindow.js';
@@ -144,8 +150,10 @@ export type { RingSystem } from './perceive/ringSystems.js';
 export { atomIndex } from './perceive/atomIndex.js';
 export { bondSelection, bondListSelection } from './perceive/bondSelection.js';
 export { ringSelection } from './perceive/ringSelection.js';
+export { isTrigonalAtom, isTrigonalRing, trigonalAtoms } from './perceive/trigonalAtoms.js';
 // shared record preparation (integrator)
 export { prepareRecord, readRecord } from './api/prepare.js';
+export { FLAT_INPUT_WARNING, isTwoDimensional } from './api/flatInput.js';
 export type { PreparedRecord } from './api/prepare.js';
 // inspect (integrator)
 export { inspectFile, inspectMolecule } from './api/inspect/inspect.js';
@@ -165,8 +173,8 @@ export type { Settled } from './io/sink.js';
 export type { ReadOptions } from './io/limits.js';
 export { DEFAULT_LIMITS } from './io/limits.js';
 export { detectFormat, formatFromExtension } from './io/detectFormat.js';
-export { findEnergy, toKcalPerMol, normalizeEnergyUnit } from './io/energy.js';
-export type { Energy, EnergyOptions, FoundEnergy } from './io/energy.js';
+export { findEnergy, toKcalPerMol, normalizeEnergyUnit, energySpreadWarning, unitRequest, UNIT_SOURCE_WORDS } from './io/energy.js';
+export type { Energy, EnergyOptions, EnergyUnitSource, FoundEnergy } from './io/energy.js';
 export { formatXyz } from './io/formatXyz.js';
 export type { FormatXyzOptions } from './io/formatXyz.js';
 export { parseXyzComment } from './io/xyzComment.js';
@@ -175,13 +183,18 @@ export { ringViewFrame, projectPoint, shoelaceArea, checkElevation } from './lay
 export type { RingViewFrame, ViewPoint } from './layout/ring/ringView.js';
 export { toPlacementJson, DEFAULT_ELEVATION_DEG } from './layout/ring/ringPlacement.js';
 export type { RingPlacement, PlacedBond, PlacementJson, RingView, RingHydrogens } from './layout/ring/ringPlacement.js';
-export { chairTemplate, assertChair, ringName, TEMPLATE_ELEVATION_DEG } from './layout/ring/chairTemplate.js';
+export { chairTemplate, assertChair, ringName, TEMPLATE_BOND_FRACTION } from './layout/ring/chairTemplate.js';
+export { chairOutline, type ChairOutlineKind } from './layout/ring/chairOutline.js';
+export { ringHydrogenMode, type RingHydrogenMode } from './layout/ring/ringHydrogens.js';
 export type { ChairTemplateOptions } from './layout/ring/chairTemplate.js';
 export { ringProjection } from './layout/ring/ringProjection.js';
 export type { RingProjectionOptions } from './layout/ring/ringProjection.js';
 export { ringCaption, descriptorRuns, ringTitle, ringDescription } from './layout/ring/ringCaption.js';
 export type { CaptionRun } from './layout/ring/ringCaption.js';
 export { groupText } from './layout/ring/ringLabels.js';
+export { groupLabel, isTerminalDouble } from './layout/text/groupLabel.js';
+export type { GroupLabel, GroupContext } from './layout/text/groupLabel.js';
+export { chemicalRingOrder } from './analysis/chemicalNumbering.js';
 export type { RingLabels } from './layout/ring/ringLabels.js';
 export { layoutRing } from './layout/ring/ringLayout.js';
 export type { RingLayoutOptions } from './layout/ring/ringLayout.js';
@@ -189,7 +202,7 @@ export { chairFigure } from './api/figures/chair.js';
 export type { ChairFigure, ChairFigureOptions } from './api/figures/chair.js';
 // batch + ensemble (area H)
 export { BOND_SETS, figureBonds, ringBonds } from './analysis/figureBonds.js';
-export type { BondSet } from './analysis/figureBonds.js';
+export type { BondSet, FigureBondOptions } from './analysis/figureBonds.js';
 export { layoutContactSheet, panelLetter } from './layout/sheets/contactSheet.js';
 export type { SheetPanel, ContactSheetOptions, PanelPlacement } from './layout/sheets/contactSheet.js';
 export { layoutEnergyLadder, percentText } from './layout/plots/energyLadder.js';

@@ -74,6 +74,16 @@ export interface SkippedCoupling {
 export type CouplingResult = Coupling | SkippedCoupling;
 
 /** True when the result is a skipped fragment. */
+/**
+ * The warning for a couplings request on a file without hydrogens (else nothing would say why none is printed),
+ * or `null` when the molecule has hydrogens.
+ * @example noHydrogenWarning(heavyAtomsOnly)?.code // 'no-hydrogens'
+ */
+export function noHydrogenWarning(mol: Pick<Molecule, 'atoms'>): Warning | null {
+  if (mol.atoms.some((a) => a.element === 'H')) return null;
+  return { code: 'no-hydrogens', message: 'the file has no hydrogen atoms: ³J(H,H) needs explicit hydrogens, so no couplings are predicted' };
+}
+
 export function isSkippedCoupling(r: CouplingResult): r is SkippedCoupling {
   return 'skipped' in r;
 }

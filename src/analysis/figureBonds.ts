@@ -9,9 +9,18 @@
  * - `all`: ring bonds as above, then every other bond whose two atoms each have at least one other neighbour
  *   (so both ends of the projection show something); bonds to hydrogen and to other terminal atoms are left out.
  * Bonds outside rings are written lower atom first and sorted by (front, back).
+ * Ring bonds between two trigonal atoms (inside aromatic rings, or between sp² ring atoms; trigonalAtoms.ts) are
+ * left out of `ring` and `all` unless `trigonal` is true: their Newman projections only show a flat ring.
  */
 import type { Molecule } from '../model/molecule.js';
 import type { Graph } from '../perceive/graph.js';
+import { isTrigonalAtom } from '../perceive/trigonalAtoms.js';
+
+/** Options of {@link figureBonds}. */
+export interface FigureBondOptions {
+  /** Draw ring bonds between two trigonal (sp², aromatic) atoms too. Default false. */
+  readonly trigonal?: boolean;
+}
 
 /** Named bond sets for batch Newman figures. */
 export const BOND_SETS = new Map([
@@ -43,11 +52,16 @@ export function ringBonds(rings: readonly (readonly number[])[]): [number, numbe
  * @example figureBonds(butane, graph, [], 'rotatable') // [[1, 2]]
  */
 export function figureBonds(
-  mol: Pick<Molecule, 'atoms' | 'bonds'>,
+  mol: Pick<Molecule, 'atoms' | 'bonds' | 'coords'>,
   graph: Graph,
   rings: readonly (readonly number[])[],
   set: BondSet,
+  options: FigureBondOptions = {},
 ): [number, number][] {
+  const flat = new Map<number, boolean>();
+  const trig = (i: number) => flat.get(i) ?? flat.set(i, isTrigonalAtom(mol, graph, i)).get(i)!;
+  const ringSet = (): [number, number][] =>
+    options.trigonal ? ringBonds(rings) : ringBonds(rings).filter(([a, b]) => !(trig(a) && trig(b)));
   const inRing = new Set(ringBonds(rings).map(([a, b]) => key(a, b)));
   const heavy = (i: number) => mol.atoms[i]!.element !== 'H';
   const otherHeavy = (i: number, not: number) => graph.neighbors[i]!.some((j) => j !== not && heavy(j));
@@ -56,11 +70,11 @@ export function figureBonds(
     .filter((b) => !inRing.has(key(b.a, b.b)))
     .map((b) => ({ order: b.order, pair: (b.a < b.b ? [b.a, b.b] : [b.b, b.a]) as [number, number] }))
     .sort((x, y) => x.pair[0] - y.pair[0] || x.pair[1] - y.pair[1]);
-  if (set === 'ring') return ringBonds(rings);
+  if (set === 'ring') return ringSet();
   if (set === 'rotatable') {
     return acyclic
       .filter(({ order, pair: [a, b] }) => order === 1 && heavy(a) && heavy(b) && otherHeavy(a, b) && otherHeavy(b, a))
       .map((x) => x.pair);
   }
-  return [...ringBonds(rings), ...acyclic.filter(({ pair: [a, b] }) => other(a, b) && other(b, a)).map((x) => x.pair)];
+  return [...ringSet(), ...acyclic.filter(({ pair: [a, b] }) => other(a, b) && other(b, a)).map((x) => x.pair)];
 }

@@ -52,7 +52,7 @@ export interface NewmanJson {
 export interface NewmanJsonOptions {
   /** ³J(H,H) for front/back hydrogen pairs (0-based atoms), from the coupling module. Default: none (`[]`). */
   readonly couplings?: readonly NewmanCouplingInput[];
-  /** Decimal places for degrees and Hz. Default 2. */
+  /** Decimal places for degrees and Hz. Default 4 (as every JSON document). */
   readonly digits?: number;
 }
 
@@ -71,7 +71,7 @@ const rounder = (digits: number) => {
  * @example JSON.stringify(toNewmanJson(view, mol))
  */
 export function toNewmanJson(view: NewmanView, mol: Molecule, options: NewmanJsonOptions = {}): NewmanJson {
-  const round = rounder(options.digits ?? 2);
+  const round = rounder(options.digits ?? 4);
   const sub = (s: NewmanView['frontSubstituents'][number]): NewmanJsonSubstituent => ({ atom: s.atom + 1, element: s.element, azimuthDeg: round(s.azimuthDeg) });
   return {
     schema: 'conformark/newman@1',

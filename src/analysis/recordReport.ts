@@ -10,6 +10,7 @@ import { analyzeRing, type AnalyzeRingOptions } from './ringAnalysis.js';
 import { toReportRing, type ReportRing } from './ringReport.js';
 import {
   isSkippedCoupling,
+  noHydrogenWarning,
   ringCouplings,
   toCouplingJson,
   type CouplingJson,
@@ -30,7 +31,8 @@ export interface RecordReportOptions {
 export interface RecordReport {
   index: number;
   title: string;
-  energy: { value: number; unit: string; field: string } | null;
+  /** The energy as found; `unit` null when nothing says it (`unitFrom` tells how it was known). */
+  energy: { value: number; unit: string | null; unitFrom: string | null; field: string } | null;
   atoms: { id: number; element: string; name: string | null; xyz: [number, number, number] }[];
   bonds: { atoms: [number, number]; order: number; perceived: boolean }[];
   rings: ReportRing[];
@@ -62,13 +64,12 @@ export function recordReport(
     })),
     bonds: (mol.bonds ?? []).map((b) => ({ atoms: [b.a + 1, b.b + 1], order: b.order, perceived: b.perceived })),
     rings: analysed.map(toReportRing),
-    warnings: analysed.flatMap((r) =>
-      r.warnings
-        .filter((w) => !(w.code === 'ring-nearly-planar' && isUnsaturated(graph, r.atoms)))
-        .map((w) => ({ ...w, message: `ring ${r.id}: ${w.message}` })),
-    ),
+    // aromatic and other sp²-only rings carry no nearly-planar warning (analyzeRing leaves it out)
+    warnings: analysed.flatMap((r) => r.warnings.map((w) => ({ ...w, message: `ring ${r.id}: ${w.message}` }))),
   };
   if (options.couplings) {
+    const noH = noHydrogenWarning(mol);
+    if (noH) report.warnings.push(noH);
     report.couplings = analysed.flatMap((r) =>
       ringCouplings(mol, graph, r.atoms, options.coupling)
         .filter((x) => !isSkippedCoupling(x))
@@ -76,9 +77,4 @@ export function recordReport(
     );
   }
   return report;
-}
-
-/** A ring whose atoms all have at most three neighbours (aromatic or conjugated) is planar by nature: no warning. */
-function isUnsaturated(graph: Graph, atoms: readonly number[]): boolean {
-  return atoms.every((a) => graph.neighbors[a]!.length <= 3);
 }

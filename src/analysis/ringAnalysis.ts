@@ -6,17 +6,22 @@
 import { atomPosition, type Molecule, type Vec3 } from '../model/molecule.js';
 import { usageError, type Warning } from '../model/errors.js';
 import { cremerPople, meanPlane, PHASE_THRESHOLD, type Puckering } from '../geometry/cremerPople.js';
-import { altonaSundaralingam, fourierPseudorotation } from '../geometry/pseudorotation.js';
+import { altonaSundaralingamFit, fourierPseudorotation, type AmplitudeMethod } from '../geometry/pseudorotation.js';
 import { torsion } from '../geometry/torsion.js';
 import type { Graph } from '../perceive/graph.js';
+import { isTrigonalRing } from '../perceive/trigonalAtoms.js';
 import { ringReference } from './ringReference.js';
 import { classifyRing, type FormFit, type RingShapeOptions } from './ringShape.js';
 import { chosenPlane, type DescriptorParts } from './ringDescriptor.js';
 import type { RingShape } from './ringForms.js';
 import { ringSubstituents, type RingSubstituent, type SubstituentOptions } from './substituents.js';
 
-/** Which pseudorotation formula to report for five-rings. */
-export type PseudorotationMethod = 'altona-sundaralingam' | 'fourier';
+/**
+ * How a five-ring's τm was found (P is the Altona–Sundaralingam closed form in all but `fourier`): `closed-form`
+ * ν2 / cos P, `least-squares` fit of all five torsions at that P (near P = 90° and 270°), `blended` between the
+ * two, or `fourier` (P and amplitude from the Fourier form, on request).
+ */
+export type PseudorotationMethod = AmplitudeMethod | 'fourier';
 
 /** Options of `analyzeRing`. */
 export interface AnalyzeRingOptions extends RingShapeOptions, SubstituentOptions {
@@ -24,11 +29,15 @@ export interface AnalyzeRingOptions extends RingShapeOptions, SubstituentOptions
   readonly id?: number;
   /** Use `ringAtoms` exactly in the given order (user-given ordered ring). Default false: reference order. */
   readonly ordered?: boolean;
+  /** With `ordered`: locants of the positions (chemical locants) and the numbering rule in words. Default: 1…N. */
+  readonly locants?: readonly string[];
+  readonly numberingRule?: string;
   /**
-   * Five-ring pseudorotation formula. `auto` (default) uses the Altona–Sundaralingam formula except where
-   * |cos P| < 0.2 (P near 90 or 270, where ν2/cos P is unstable), where it uses the Fourier form.
+   * Five-ring pseudorotation. `altona-sundaralingam` (default): P from the closed form, τm from ν2 / cos P where
+   * |cos P| ≥ 0.3, from a least-squares fit of all five torsions where |cos P| ≤ 0.2, blended between.
+   * `fourier`: P and amplitude from the Fourier form of the same model.
    */
-  readonly pseudorotation?: 'auto' | PseudorotationMethod;
+  readonly pseudorotation?: 'altona-sundaralingam' | 'fourier';
 }
 
 /**
@@ -57,7 +66,7 @@ export interface RingAnalysis {
   readonly normal: Vec3;
   readonly centre: Vec3;
   readonly z: readonly number[];
-  /** Five-rings only: AS phase P and amplitude, degrees. */
+  /** Five-rings only: AS phase P and amplitude τm, degrees, and how τm was found. */
   readonly pseudorotation: { phaseDeg: number; amplitudeDeg: number; method: PseudorotationMethod } | null;
   readonly shape: RingShape;
   readonly descriptor: string | null;
@@ -78,14 +87,15 @@ function puckeringOf(points: Vec3[]): Puckering {
   return { Q: 0, amplitudes: [], thetaDeg: null, phiDeg: null, ...plane, z: plane.z.map(() => 0) };
 }
 
-function pseudorotationOf(nu: (number | null)[], method: 'auto' | PseudorotationMethod): RingAnalysis['pseudorotation'] {
+function pseudorotationOf(nu: (number | null)[], method: 'altona-sundaralingam' | 'fourier'): RingAnalysis['pseudorotation'] {
   if (nu.some((v) => v === null)) return null;
   const values = nu as number[];
-  const as = altonaSundaralingam(values);
-  const useFourier =
-    method === 'fourier' || as === null || (method === 'auto' && Math.abs(Math.cos((as.phaseDeg * Math.PI) / 180)) < 0.2);
-  const result = useFourier ? fourierPseudorotation(values) : as;
-  return result ? { ...result, method: useFourier ? 'fourier' : 'altona-sundaralingam' } : null;
+  if (method === 'fourier') {
+    const f = fourierPseudorotation(values);
+    return f ? { ...f, method: 'fourier' } : null;
+  }
+  const as = altonaSundaralingamFit(values);
+  return as ? { phaseDeg: as.phaseDeg, amplitudeDeg: as.amplitudeDeg, method: as.amplitudeMethod } : null;
 }
 
 /**
@@ -99,7 +109,7 @@ export function analyzeRing(
   options: AnalyzeRingOptions = {},
 ): RingAnalysis {
   // 1. Reference numbering and Cremer–Pople coordinates in that numbering.
-  const ref = ringReference(mol, graph, ringAtoms, { ordered: options.ordered ?? false });
+  const ref = ringReference(mol, graph, ringAtoms, { ordered: options.ordered ?? false, locants: options.locants, rule: options.numberingRule });
   const atoms = ref.atoms;
   const n = atoms.length;
   const label = atoms.map((a) => a + 1).join('-');
@@ -108,7 +118,8 @@ export function analyzeRing(
   const cls = classifyRing(pk, ref.locants, options);
   const warnings: Warning[] = [];
   const planar = cls.shape === 'planar';
-  if (planar && n > 3) {
+  // an aromatic or other sp²-only ring is meant to be flat: only a ring that should pucker gets the warning
+  if (planar && n > 3 && !isTrigonalRing(mol, graph, atoms)) {
     warnings.push({
       code: 'ring-nearly-planar',
       message: `ring ${label} is nearly planar (Q ${pk.Q.toFixed(3)} Å): phase and ring form are undefined`,
@@ -131,7 +142,7 @@ export function analyzeRing(
     warnings.push({ code: 'ring-torsion-undefined', message: `ring ${label} has a collinear triple of atoms` });
   }
   const nu = n === 5 ? [torsions[4]!, ...torsions.slice(0, 4)].map((t) => t.angleDeg) : [];
-  const pseudorotation = n === 5 && !planar ? pseudorotationOf(nu, options.pseudorotation ?? 'auto') : null;
+  const pseudorotation = n === 5 && !planar ? pseudorotationOf(nu, options.pseudorotation ?? 'altona-sundaralingam') : null;
   // 4. Substituents.
   const plane = cls.form ? chosenPlane(cls.form, ref.locants) : null;
   const substituents = ringSubstituents(mol, graph, atoms, pk.normal, cls.shape, cls.form, plane, options);

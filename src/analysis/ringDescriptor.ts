@@ -25,8 +25,11 @@ export interface RingDescriptor {
   readonly html: string;
 }
 
-/** Rank of a locant: carbons by number, anything non-numeric (the heteroatom) after all of them. */
-const rank = (locant: string, n: number) => (/^\d+$/.test(locant) ? Number(locant) : n);
+/** Rank of a locant: carbons by number (a fusion locant `4a` just after 4), anything else (the heteroatom) after all of them. */
+const rank = (locant: string, n: number) => {
+  const m = /^(\d+)([a-z]?)$/.exec(locant);
+  return m ? Number(m[1]) + (m[2] ? 0.5 : 0) : n;
+};
 
 function planeKey(plane: ReferencePlane, locants: readonly string[]): number[] {
   return [...plane.above, ...plane.below].map((j) => rank(locants[j]!, locants.length)).sort((a, b) => a - b);

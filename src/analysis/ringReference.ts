@@ -34,6 +34,9 @@ export interface RingReference {
 export interface RingReferenceOptions {
   /** Use the atoms exactly in the given order (a user-given ordered ring). Default false. */
   readonly ordered?: boolean;
+  /** With `ordered`: the locant of each position (e.g. chemical locants `1`…`6`, `4a`) and the rule in words. */
+  readonly locants?: readonly string[];
+  readonly rule?: string;
 }
 
 const isCarbonOrHydrogen = (el: string) => el === 'C' || el === 'H';
@@ -98,8 +101,8 @@ export function ringReference(
     const oneHetero = hetero.length === 1 && hetero[0] === walk[0];
     return {
       atoms: walk,
-      locants: oneHetero ? sugarLocants(element(walk[0]!), n) : numeric,
-      rule: 'user-given order, used exactly as given',
+      locants: options.locants?.length === n ? [...options.locants] : oneHetero ? sugarLocants(element(walk[0]!), n) : numeric,
+      rule: options.rule ?? 'user-given order, used exactly as given',
     };
   }
   if (hetero.length === 1) {

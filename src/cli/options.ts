@@ -21,6 +21,14 @@ export function finiteNumber(flag: string, text: string, min = -Infinity, max = 
   return value;
 }
 
+/** Help text of `--dpi`, shared by every command that writes PNG. */
+export const DPI_HELP = 'PNG resolution in dots per inch, 36 to 2400; the PNG is tagged with it and keeps the figure\'s print size (default 300)';
+
+/** `--dpi` from its text, or undefined when absent. */
+export function dpiOption(text: string | undefined): number | undefined {
+  return text === undefined ? undefined : finiteNumber('--dpi', text, 36, 2400);
+}
+
 /** One of a fixed set of words, or `fallback` when the flag is absent. */
 export function oneOf<T extends string>(flag: string, text: string | undefined, words: readonly T[], fallback: T): T {
   if (text === undefined) return fallback;

@@ -3,10 +3,11 @@
  * `cremerPople` (Cremer & Pople 1975, J. Am. Chem. Soc. 97, 1354; METHODS.md §2.1) with the sin/cos tables of
  * the ring size computed once and the results written into a caller-owned record, so the per-frame work
  * allocates nothing. Five-rings also get the Altona–Sundaralingam phase P and amplitude τm (Altona &
- * Sundaralingam 1972, J. Am. Chem. Soc. 94, 8205; METHODS.md §4.2), chosen as `analyzeRing` does by default:
- * the AS formula, or the Fourier form where |cos P| < 0.2.
+ * Sundaralingam 1972, J. Am. Chem. Soc. 94, 8205), as `analyzeRing` gives them by default: P from the closed
+ * form, τm from ν2 / cos P, a least-squares fit near P = 90°/270°, or a blend between (altonaSundaralingamFit).
  */
 import { torsionAt } from './torsionAt.js';
+import { closedFormWeight } from './pseudorotation.js';
 
 /** What the kernel writes for one frame. Fields are NaN where they do not apply. */
 export class PuckerValues {
@@ -20,7 +21,7 @@ export class PuckerValues {
   thetaDeg = NaN;
   /** Five-rings: pseudorotation phase P in [0, 360), deg. */
   pDeg = NaN;
-  /** Five-rings: τm (AS) or ν_max (Fourier), deg. */
+  /** Five-rings: τm, deg (closed form, least squares or blended, as altonaSundaralingamFit). */
   tauMDeg = NaN;
 }
 
@@ -116,31 +117,20 @@ export class PuckerKernel {
       if (Number.isNaN(nu[k]!)) return;
     }
     const [n0, n1, n2, n3, n4] = nu as unknown as [number, number, number, number, number];
+    // Altona–Sundaralingam closed-form P; τm as altonaSundaralingamFit (closed form, least squares, blended)
     const y = n4 + n1 - (n3 + n0);
     const x = 2 * n2 * SIN_SUM;
-    let useFourier = Math.hypot(x, y) < 1e-9;
-    if (!useFourier) {
-      const p = Math.atan2(y, x);
-      const c = Math.cos(p);
-      if (Math.abs(c) < 0.2) useFourier = true;
-      else {
-        const deg = p * DEG;
-        out.pDeg = deg < 0 ? deg + 360 : deg;
-        out.tauMDeg = n2 / c;
-        return;
-      }
-    }
-    // Fourier form: A = Σ ν_j cos(144°(j−2)), B = −Σ ν_j sin(144°(j−2)).
-    let a = 0, b = 0;
-    for (let j = 0; j < 5; j++) {
-      const t = ((144 * (j - 2)) / 180) * Math.PI;
-      a += nu[j]! * Math.cos(t);
-      b -= nu[j]! * Math.sin(t);
-    }
-    const amp = 0.4 * Math.hypot(a, b);
-    if (amp < 1e-9) return;
-    const deg = Math.atan2(b, a) * DEG;
+    if (Math.hypot(x, y) < 1e-9) return;
+    const p = Math.atan2(y, x);
+    const deg = p * DEG;
     out.pDeg = deg < 0 ? deg + 360 : deg;
-    out.tauMDeg = amp;
+    const c = Math.cos(p);
+    const w = closedFormWeight(c);
+    let fit = 0;
+    if (w < 1) {
+      for (let j = 0; j < 5; j++) fit += nu[j]! * Math.cos(p + ((144 * (j - 2)) / 180) * Math.PI);
+      fit *= 0.4;
+    }
+    out.tauMDeg = w * (w > 0 ? n2 / c : 0) + (1 - w) * fit;
   }
 }

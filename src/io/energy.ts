@@ -1,26 +1,31 @@
 /**
  * Energies stored with a record: an SD data field or XYZ `key=value` property whose name contains "energy"
- * (any case) or is `E`, or the one named by the caller; else an `energy: -12.3` phrase or a bare number on the
- * XYZ comment line (as CREST/xtb ensembles write it, in hartree). The unit comes from the caller, a unit word
- * after the value, or the field name; otherwise it is assumed and a warning says so.
+ * (any case) or is `E`, or the one named by the caller; else an energy on the XYZ comment line. The unit comes
+ * from the caller, a unit word after the value, the field name, or a recognised file convention
+ * (energyConventions.ts); otherwise it is unknown (`unit: null`, never guessed) and a warning says how to give it.
  */
 import { ConformarkError, usageError, type Warning } from '../model/errors.js';
 import type { Molecule } from '../model/molecule.js';
 import { fields, parseNumber } from './numbers.js';
 
 import type { EnergyUnit } from '../model/energyUnits.js';
+import { propertyConvention, titleConvention, type EnergyUnitSource } from './energyConventions.js';
 
 export { toKcalPerMol, type EnergyUnit } from '../model/energyUnits.js';
+export { UNIT_SOURCE_WORDS, type EnergyUnitSource } from './energyConventions.js';
 
 /** An energy as reported (`inspect --json` `energy`). */
 export interface Energy {
   readonly value: number;
-  readonly unit: EnergyUnit;
+  /** The unit, or `null` when nothing in the file or the options says it (callers that need one refuse). */
+  readonly unit: EnergyUnit | null;
+  /** How the unit was known (`option`, `value`, `field-name` or a file convention), or `null` when unknown. */
+  readonly unitFrom: EnergyUnitSource | null;
   /** The property it came from, or `title` for the comment line. */
   readonly field: string;
 }
 
-/** `Energy` plus the warning raised when the unit had to be assumed. */
+/** `Energy` plus the warning raised when the unit is unknown. */
 export interface FoundEnergy extends Energy {
   readonly warning: Warning | null;
 }
@@ -29,7 +34,7 @@ export interface FoundEnergy extends Energy {
 export interface EnergyOptions {
   /** Property holding the energy. Default: the first whose name contains "energy" or is `E`. */
   readonly field?: string;
-  /** Unit of the values (`kcal/mol`, `kJ/mol`, `hartree`/`Eh`/`au`, `eV`). Default: from the file, else assumed. */
+  /** Unit of the values (`kcal/mol`, `kJ/mol`, `hartree`/`Eh`/`au`, `eV`). Default: from the file, else unknown. */
   readonly unit?: string;
 }
 
@@ -63,10 +68,15 @@ function unitFromName(name: string): EnergyUnit | null {
 
 const isEnergyName = (name: string): boolean => /energy/i.test(name) || name === 'E' || name === 'e';
 
+/** The one-line request for a unit, used by every caller that refuses an energy without one. */
+export function unitRequest(field: string): string {
+  return `the energy in '${field}' has no unit: give it with --energy-unit (library: energy.unit) or put it in the SD field name, e.g. 'energy (kcal/mol)'`;
+}
+
 /**
  * Finds the energy of a record, or `null` when it has none.
  * Throws `ConformarkError` when `options.field` is missing or not a number, or `options.unit` is unknown.
- * @example findEnergy(mol) // { value: -12.5, unit: 'kcal/mol', field: 'energy', warning: null }
+ * @example findEnergy(mol) // { value: -12.5, unit: 'kcal/mol', unitFrom: 'value', field: 'energy', warning: null }
  */
 export function findEnergy(mol: Molecule, options: EnergyOptions = {}): FoundEnergy | null {
   const forced = options.unit === undefined ? null : normalizeEnergyUnit(options.unit);
@@ -75,20 +85,21 @@ export function findEnergy(mol: Molecule, options: EnergyOptions = {}): FoundEne
   }
   const found = options.field === undefined ? autoField(mol) : namedField(mol, options.field);
   if (!found) return null;
-  const unit = forced ?? found.unit ?? unitFromName(found.field);
-  if (unit) return { value: found.value, unit, field: found.field, warning: null };
-  const assumed: EnergyUnit = found.field === 'title' && found.bare ? 'hartree' : 'kcal/mol';
-  const message =
-    `record ${mol.source.index}: the energy in '${found.field}' has no unit; assumed ${assumed}` +
-    ' (give the unit with the energy unit option)';
-  return { value: found.value, unit: assumed, field: found.field, warning: { code: 'energy-unit-assumed', message } };
+  const base = { value: found.value, field: found.field, warning: null };
+  if (forced) return { ...base, unit: forced, unitFrom: 'option' };
+  if (found.unit) return { ...base, unit: found.unit, unitFrom: found.unitFrom ?? 'value' };
+  const named = unitFromName(found.field);
+  if (named) return { ...base, unit: named, unitFrom: 'field-name' };
+  const convention = found.field === 'title' ? null : propertyConvention(found.field, mol.properties, mol.source.format);
+  if (convention) return { ...base, ...convention };
+  return { ...base, unit: null, unitFrom: null, warning: { code: 'energy-unit-unknown', message: unitRequest(found.field) } };
 }
 
 interface Raw {
   readonly field: string;
   readonly value: number;
   readonly unit: EnergyUnit | null;
-  readonly bare?: boolean;
+  readonly unitFrom?: EnergyUnitSource | null;
 }
 
 /** Value text `-12.5 kcal/mol` → number and unit word; `null` if it does not start with a finite number. */
@@ -111,10 +122,8 @@ function autoField(mol: Molecule): Raw | null {
     const raw = readValue(name, text, mol.title);
     if (raw) return raw;
   }
-  const bare = fields(mol.title);
-  if (bare.length === 1 && Number.isFinite(parseNumber(bare[0]!)) && /[.eE]/.test(bare[0]!)) {
-    return { field: 'title', value: parseNumber(bare[0]!), unit: null, bare: true };
-  }
+  const convention = titleConvention(mol.title);
+  if (convention) return { field: 'title', ...convention };
   const m = /\benergy\s*[:=]?\s*(\S+)\s*(\S*)/i.exec(mol.title);
   if (m && Number.isFinite(parseNumber(m[1]!))) {
     return { field: 'title', value: parseNumber(m[1]!), unit: normalizeEnergyUnit(m[2]!) };
@@ -136,4 +145,29 @@ function namedField(mol: Molecule, field: string): Raw {
     throw new ConformarkError({ code: 'bad-energy', file: mol.source.file, line: mol.source.line, message });
   }
   return raw;
+}
+
+/** Spreads (kcal/mol) outside which relative energies look like the wrong unit: common practice, no source. */
+export const PLAUSIBLE_SPREAD_KCAL = { min: 0.01, max: 1000 } as const;
+
+/**
+ * A warning when the spread of energies (kcal/mol, two or more values) is under 0.01 or over 1,000 kcal/mol,
+ * which is what hartree read as kcal/mol (or the reverse) looks like; `null` when it is plausible.
+ * @example energySpreadWarning([0, 0.004], 'kcal/mol')?.code // 'energy-spread-implausible'
+ */
+export function energySpreadWarning(kcal: readonly number[], units: string): Warning | null {
+  if (kcal.length < 2) return null;
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const e of kcal) {
+    lo = Math.min(lo, e);
+    hi = Math.max(hi, e);
+  }
+  const spread = hi - lo;
+  if (spread >= PLAUSIBLE_SPREAD_KCAL.min && spread <= PLAUSIBLE_SPREAD_KCAL.max) return null;
+  const shown = spread < 1 ? spread.toPrecision(2) : spread.toFixed(0);
+  return {
+    code: 'energy-spread-implausible',
+    message: `relative energies span ${shown} kcal/mol (read as ${units}); that looks like the wrong unit: check --energy-unit`,
+  };
 }

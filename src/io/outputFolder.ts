@@ -76,6 +76,8 @@ export class OutputFolder {
     /** Files the earlier run's manifest listed. */
     readonly previous: readonly string[],
     release: () => void,
+    /** Folders `open` created (outermost first): an aborted run removes them again when they are empty. */
+    private readonly created: readonly string[] = [],
   ) {
     this.release = release;
   }
@@ -84,10 +86,10 @@ export class OutputFolder {
   static open(shown: string, kind: ManifestKind): OutputFolder {
     const dir = resolve(shown);
     if (existsSync(dir) && !statSync(dir).isDirectory()) throw usageError('write-failed', 'is a file, not a folder', shown);
-    makeFolders(dir);
+    const created = makeFolders(dir);
     const release = lockFolder(dir, shown);
     try {
-      return new OutputFolder(dir, shown, kind, readPrevious(dir, shown, kind), release);
+      return new OutputFolder(dir, shown, kind, readPrevious(dir, shown, kind), release, created);
     } catch (err) {
       release();
       throw err;
@@ -169,11 +171,24 @@ export class OutputFolder {
     }
   }
 
-  /** Removes every staged file and releases the lock; the folder is as before the run. Safe to call twice. */
+  /**
+   * Removes every staged file and releases the lock; the folder is as before the run (a folder this run
+   * created is removed again when nothing else was put in it). Safe to call twice.
+   */
   abort(): void {
     for (const tmp of this.staged.values()) tmp.remove();
     this.staged.clear();
+    const wasOpen = !this.closed;
     this.close();
+    if (!wasOpen) return;
+    for (const d of [...this.created].reverse()) {
+      try {
+        if (readdirSync(d).length > 0) break;
+        rmdirSync(d);
+      } catch {
+        break;
+      }
+    }
   }
 
   private close(): void {

@@ -62,7 +62,7 @@ export function isProtected(path: string): boolean {
  * Creates the missing folders of `dir` one level at a time (Node's recursive mkdir can spin forever on
  * pseudo file systems such as /proc).
  */
-export function makeFolders(dir: string): void {
+export function makeFolders(dir: string): string[] {
   const missing: string[] = [];
   for (let d = dir; !existsSync(d); d = dirname(d)) {
     missing.push(d);
@@ -73,6 +73,7 @@ export function makeFolders(dir: string): void {
   } catch (err) {
     throw writeFailure(err, dir);
   }
+  return missing;
 }
 
 /** Refuses `path` when it is a protected input or a folder. */

@@ -33,6 +33,15 @@ export interface SceneCircle {
   readonly atom?: number;
 }
 
+/**
+ * One piece of typeset text: on the baseline, or a smaller lowered (`sub`) or raised (`sup`) piece
+ * (`CH₃` is `CH` + sub `3`; `⁴C₁` is sup `4` + `C` + sub `1`).
+ */
+export interface TextRun {
+  readonly text: string;
+  readonly shift?: 'sub' | 'sup';
+}
+
 /** Text drawn at its baseline point (x, y), anchored start/middle/end; plain text, escaped on output. */
 export interface SceneText {
   readonly type: 'text';
@@ -40,6 +49,11 @@ export interface SceneText {
   readonly x: number;
   readonly y: number;
   readonly text: string;
+  /**
+   * Typeset pieces (sub- and superscripts as smaller shifted runs); when present `text` is their plain
+   * concatenation, kept for titles, search and older readers. Absent: `text` is drawn as one run.
+   */
+  readonly runs?: readonly TextRun[];
   readonly anchor: 'start' | 'middle' | 'end';
   /** Font size in theme units, as measured by the layout. */
   readonly fontSize: number;

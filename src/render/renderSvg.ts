@@ -18,6 +18,8 @@ import type { Primitive, RoleStyle, Theme } from './theme.js';
 import { loadTheme } from './themes.js';
 import { attrText, escapeXml, svgNumber, svgValue } from './svgMarkup.js';
 import { MAX_LABEL_LENGTH, safeText } from '../layout/text/safeText.js';
+import { runShift, scriptSize } from '../layout/text/textRuns.js';
+import type { SceneText } from '../layout/scene.js';
 
 /** Longest `<title>`/`<desc>` written, characters (labels: `MAX_LABEL_LENGTH`). */
 const MAX_DESCRIPTION_LENGTH = 2000;
@@ -43,7 +45,10 @@ type Attrs = Record<string, string | number>;
 function styleAttrs(style: RoleStyle, kind: Primitive, theme: Theme, round: (x: number) => number): Attrs {
   const a: Attrs = {};
   if (style.stroke !== undefined) a.stroke = style.stroke;
-  if (style.strokeWidth !== undefined && kind !== 'text') a['stroke-width'] = round(style.strokeWidth);
+  // text is stroked only where its role asks (a halo behind a label), then with round joins
+  const strokedText = kind === 'text' && style.stroke !== undefined && style.stroke !== 'none' && style.strokeWidth !== undefined;
+  if (style.strokeWidth !== undefined && (kind !== 'text' || strokedText)) a['stroke-width'] = round(style.strokeWidth);
+  if (strokedText) a['stroke-linejoin'] = 'round';
   if (style.strokeDasharray?.length) a['stroke-dasharray'] = style.strokeDasharray.map(round).join(' ');
   if (style.strokeLinecap !== undefined && kind !== 'text') a['stroke-linecap'] = style.strokeLinecap;
   if (style.fill !== undefined) a.fill = style.fill;
@@ -112,6 +117,18 @@ function itemText(item: SceneItem, style: string, round: (x: number) => number):
       // svg.js circle(size) stores r = size / 2, then cx = cy = r before the given centre replaces them
       return `<circle r="${svgNumber(svgValue(round(2 * item.r)) / 2)}" cx="${n(item.cx)}" cy="${n(item.cy)}" class="${role}"${atomOne(item.atom)}${style}></circle>`;
     case 'text':
-      return `<text x="${n(item.x)}" y="${n(item.y)}" text-anchor="${escapeXml(item.anchor)}" class="${role}"${atomOne(item.atom)}${atomList(item.atoms)}${style} font-size="${n(item.fontSize)}"${item.fontWeight === 'bold' ? ' font-weight="bold"' : ''}>${escapeXml(safeText(item.text, MAX_LABEL_LENGTH).text)}</text>`;
+      return `<text x="${n(item.x)}" y="${n(item.y)}" text-anchor="${escapeXml(item.anchor)}" class="${role}"${atomOne(item.atom)}${atomList(item.atoms)}${style} font-size="${n(item.fontSize)}"${item.fontWeight === 'bold' ? ' font-weight="bold"' : ''}>${textContent(item, n)}</text>`;
   }
+}
+
+/**
+ * Text content: plain text, or runs with each sub/superscript in a `<tspan>` with its own `font-size` and a
+ * numeric `baseline-shift` (user units, positive up), which resvg (PNG) and svg-to-pdfkit (PDF) both honour.
+ */
+function textContent(item: SceneText, n: (x: number) => string): string {
+  const safe = (t: string) => escapeXml(safeText(t, MAX_LABEL_LENGTH).text);
+  if (!item.runs?.some((r) => r.shift)) return safe(item.text);
+  return item.runs
+    .map((r) => (r.shift ? `<tspan font-size="${n(scriptSize(item.fontSize))}" baseline-shift="${n(runShift(r, item.fontSize))}">${safe(r.text)}</tspan>` : safe(r.text)))
+    .join('');
 }

@@ -136,7 +136,7 @@ describe('toNewmanJson', () => {
   });
 
   it('toNewmanJson reports −180 after rounding as +180', () => {
-    const m = butane(-179.9999);
+    const m = butane(-179.99999);
     const j = toNewmanJson(view(m, 1, 2), m);
     expect(j.pairs.find((p) => p.front === 1 && p.back === 4)!.torsionDeg).toBe(180);
   });

@@ -22,11 +22,27 @@ describe('SeriesBuckets', () => {
     );
   });
 
+  it('buckets() histograms hold every finite sample in its bin through every merge (fast-check, seed 32)', () => {
+    fc.assert(
+      fc.property(fc.array(fc.oneof(fc.double({ min: -10, max: 370, noNaN: true }), fc.constant(NaN)), { minLength: 1, maxLength: 2000 }), (values) => {
+        const b = new SeriesBuckets(1, 8, 1, [{ min: 0, max: 360, bins: 12 }]);
+        values.forEach((v, i) => b.add(i + 1, [v], 0));
+        const totals = new Array<number>(12).fill(0);
+        for (const x of b.buckets()) x.histograms[0]!.forEach((c, k) => (totals[k]! += c));
+        const expected = new Array<number>(12).fill(0);
+        for (const v of values) if (Number.isFinite(v)) expected[Math.min(11, Math.max(0, Math.floor(v / 30)))]!++;
+        expect(totals).toEqual(expected);
+      }),
+      { seed: 32, numRuns: 100 },
+    );
+  });
+
   it('buckets() skip non-finite values and report the majority category', () => {
     const b = new SeriesBuckets(2, 4, 2);
     b.add(1, [1, NaN], 1);
     const [first] = b.buckets();
     expect(first!.ranges).toEqual([[1, 1], null]);
+    expect(first!.histograms).toEqual([[], []]);
     expect(first!.majority).toBe(1);
   });
 });

@@ -35,6 +35,16 @@ describe('batchFile', () => {
     expect(readdirSync(dir).sort()).toEqual([...listed, 'manifest.json', 'notes.txt'].sort());
   });
 
+  it('batchFile refuses energies without a unit (one line asking for --energy-unit) before writing anything', async () => {
+    const dir = join(temp(), 'out');
+    const path = join(temp(), 'nounit.sdf');
+    writeFileSync(path, formatSdf(mols.slice(0, 2).map((m, k) => ({ ...m, properties: { energy: String(k) } }))));
+    await expect(batchFile(path, dir, { sheet: false })).rejects.toMatchObject({ code: 'energy-unit-unknown' });
+    expect(existsSync(dir)).toBe(false);
+    const { manifest } = await batchFile(path, dir, { sheet: false, energy: { unit: 'kJ/mol' } });
+    expect(manifest.errors).toEqual([]);
+  });
+
   it('batchFile draws one Newman projection per ring bond of every record, named by record and bond', async () => {
     const dir = temp();
     const { manifest, errors } = await batchFile(input, dir);

@@ -43,7 +43,7 @@ describe('chairFigure on openchemlib MMFF94s structures', () => {
     const { mol, rings } = minimisedConformers('CC1CCCCC1', 1)[0]!;
     const fig = chairFigure(mol, { rings });
     expect([...heavyClasses(mol, fig.svg, fig.ring.atoms).values()]).toEqual(['equatorial']);
-    expect(fig.svg).toContain('>CH₃</text>');
+    expect(fig.svg).toContain('>CH<tspan font-size="6" baseline-shift="-1.92">3</tspan></text>');
   });
 });
 
@@ -59,8 +59,9 @@ describe('chairFigure choices and errors', () => {
 
   it('refuses the template for a non-chair, pointing to the projected view', () => {
     expect(() => chairFigure(tb.mol, { rings: [tb.ring], view: 'template' })).toThrow(
-      /^ring 1 is a twist-boat \(\d,?\w*S\w+\), not a chair: use --view projected$/,
+      /^.+: ring 1 is a twist-boat \(\d,?\w*S\w+\), not a chair: use --view projected$/,
     );
+    expect(() => chairFigure(tb.mol, { rings: [tb.ring], view: 'template' })).toThrow(expect.objectContaining({ issues: [expect.objectContaining({ code: 'not-a-chair', file: tb.mol.source.file })] }));
   });
 
   it('fails with "no ring to draw in record N" for a record without rings', () => {
@@ -86,8 +87,10 @@ describe('chairFigure choices and errors', () => {
 
   it('captions shape, typeset descriptor and Q/θ/φ; hides hydrogens on request', () => {
     const fig = chairFigure(tb.mol, { rings: [tb.ring], hydrogens: 'hide' });
-    const texts = fig.scene.items.filter((i) => i.type === 'text' && i.role.startsWith('caption')).map((i) => (i as { text: string }).text);
-    expect(texts.join('')).toMatch(/^twist-boat [⁰¹²³⁴⁵⁶⁷⁸⁹]S[₀₁₂₃₄₅₆₇₈₉]Q 0\.765 Å  θ 90\.0°  φ \d+\.\d°$/);
+    const captions = fig.scene.items.filter((i) => i.type === 'text' && i.role === 'caption');
+    expect(captions.map((i) => (i as { text: string }).text).join('|')).toMatch(/^twist-boat \dS\d\|Q 0\.765 Å  θ 90\.0°  φ \d+\.\d°$/);
+    // the descriptor locants are typeset runs (raised and lowered), not Unicode script digits
+    expect((captions[0] as { runs?: { shift?: string }[] }).runs?.map((r) => r.shift ?? 'base')).toEqual(['base', 'sup', 'base', 'sub']);
     expect(readLines(fig.svg).filter((l) => l.cls !== 'ring-bond')).toHaveLength(0);
     expect(fig.svg).not.toContain('>H</text>');
   });

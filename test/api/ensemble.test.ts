@@ -65,9 +65,9 @@ describe('ensembleFile', () => {
   });
 
   it('ensembleOf merges a duplicate: duplicateOf names the lower record, population 0, the others unchanged', () => {
-    const eq = withProperties(chairs[0]!, { energy: '0' });
-    const ax = withProperties(chairs[1]!, { energy: '1.74' });
-    const again = withProperties(chairs[0]!, { energy: '0.02' });
+    const eq = withProperties(chairs[0]!, { 'energy (kcal/mol)': '0' });
+    const ax = withProperties(chairs[1]!, { 'energy (kcal/mol)': '1.74' });
+    const again = withProperties(chairs[0]!, { 'energy (kcal/mol)': '0.02' });
     const { report } = ensembleOf([at(eq, 1), at(ax, 2), at(again, 3)]);
     const dup = report.conformers.find((c) => c.record === 3)!;
     expect(dup.duplicateOf).toBe(1);
@@ -79,8 +79,8 @@ describe('ensembleFile', () => {
   });
 
   it('ensembleOf averages J over conformers with their populations (⟨J⟩ = Σ p_i J_i, METHODS.md §9)', () => {
-    const eq = at(withProperties(chairs[0]!, { energy: '0' }), 1);
-    const ax = at(withProperties(chairs[1]!, { energy: '1.74' }), 2);
+    const eq = at(withProperties(chairs[0]!, { 'energy (kcal/mol)': '0' }), 1);
+    const ax = at(withProperties(chairs[1]!, { 'energy (kcal/mol)': '1.74' }), 2);
     const { report } = ensembleOf([eq, ax]);
     const j = [eq, ax].map((m) => {
       const p = prepareRecord(m);
@@ -102,14 +102,38 @@ describe('ensembleFile', () => {
 
   it('ensembleFile reports a record without an energy and ranks the rest', async () => {
     const path = join(temp(), 'partial.sdf');
-    writeFileSync(path, formatSdf([withProperties(butane(180), { energy: '0' }), withProperties(butane(65), {}), withProperties(butane(-65), { energy: '0.66' })]));
+    writeFileSync(path, formatSdf([withProperties(butane(180), { 'energy (kcal/mol)': '0' }), withProperties(butane(65), {}), withProperties(butane(-65), { 'energy (kcal/mol)': '0.66' })]));
     const { report, errors } = await ensembleFile(path);
     expect(errors.map((e) => [e.record, e.code])).toEqual([[2, 'no-energy']]);
     expect(report.conformers.map((c) => c.record)).toEqual([1, 3]);
   });
 
+  it('ensembleFile refuses energies without a unit with one line asking for --energy-unit, and takes the option', async () => {
+    const path = join(temp(), 'nounit.sdf');
+    writeFileSync(path, formatSdf([withProperties(butane(180), { energy: '0' }), withProperties(butane(65), { energy: '0.66' })]));
+    const refusal = await ensembleFile(path).catch((e: unknown) => e as Error);
+    expect(refusal).toMatchObject({ code: 'energy-unit-unknown' });
+    expect((refusal as Error).message).toMatch(/record 1: the energy in 'energy' has no unit: give it with --energy-unit/);
+    expect((refusal as Error).message).not.toContain('\n');
+    const { report } = await ensembleFile(path, { energy: { unit: 'kcal/mol' } });
+    expect(report.conformers.map((c) => c.relativeEnergy)).toEqual([0, 0.66]);
+    expect(report.notes).toContain('energy unit as given');
+  });
+
+  it('ensembleOf reads a semiempirical XYZ ensemble as hartree and warns when the spread looks like the wrong unit', () => {
+    const xyz = (e: string, t: number) => ({ ...butane(t), title: ` energy: ${e} gnorm: 0.0003 xtb: 6.6.1` });
+    const right = ensembleOf([at(xyz('-13.0000', 180), 1), at(xyz('-12.9990', 65), 2)]);
+    expect(right.report.conformers[1]!.relativeEnergy).toBeCloseTo(0.6275, 4); // 0.001 Eh
+    expect(right.warnings).toEqual([]);
+    expect(right.report.notes.some((n) => n.includes("'energy: … gnorm: …'"))).toBe(true);
+    // the same file forced to kcal/mol: a spread of 0.001 kcal/mol is implausible
+    const wrong = ensembleOf([at(xyz('-13.0000', 180), 1), at(xyz('-12.9990', 65), 2)], { energy: { unit: 'kcal/mol' } });
+    expect(wrong.warnings.map((w) => w.warning.code)).toEqual(['energy-spread-implausible']);
+    expect(wrong.warnings[0]!.warning.message).toBe('relative energies span 0.0010 kcal/mol (read as kcal/mol); that looks like the wrong unit: check --energy-unit');
+  });
+
   it('writeEnsembleFigures writes a well-formed sheet in energy order and an energy ladder', () => {
-    const result = ensembleOf([at(withProperties(chairs[1]!, { energy: '1.74' }), 1), at(withProperties(chairs[0]!, { energy: '0' }), 2)]);
+    const result = ensembleOf([at(withProperties(chairs[1]!, { 'energy (kcal/mol)': '1.74' }), 1), at(withProperties(chairs[0]!, { 'energy (kcal/mol)': '0' }), 2)]);
     const dir = temp();
     expect(writeEnsembleFigures({ ...result, errors: [] }, dir, { idPrefix: 'x-' })).toEqual(['ensemble-sheet-1.svg', 'energy-ladder.svg']);
     const sheet = readFileSync(join(dir, 'ensemble-sheet-1.svg'), 'utf8');

@@ -21,7 +21,7 @@ describe('inspectFile', () => {
     expect(Object.keys(r.rings[0]!).slice(0, 8)).toEqual([
       'id', 'atoms', 'size', 'puckering', 'shape', 'descriptor', 'torsions', 'substituents',
     ]);
-    expect(r.energy).toEqual({ value: expect.any(Number), unit: 'kcal/mol', field: 'MMFF94s energy (kcal/mol)' });
+    expect(r.energy).toEqual({ value: expect.any(Number), unit: 'kcal/mol', unitFrom: 'field-name', field: 'MMFF94s energy (kcal/mol)' });
   });
 
   it('inspectFile finds methyl β-D-glucopyranoside a 4C1 chair with every exocyclic heavy atom equatorial (trade fact, common practice, no source)', async () => {

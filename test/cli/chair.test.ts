@@ -19,11 +19,13 @@ beforeAll(() => {
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
 describe('conformark chair', () => {
-  it('conformark chair FILE draws the first record as a chair template on stdout', () => {
+  it('conformark chair FILE draws the first record as a chair template on stdout, ring CH2 hydrogens left out by default', () => {
     const r = run('chair', sdf);
     expect(r.status).toBe(0);
     expect(r.stdout).toMatch(/^<svg[^>]*class="conformark chair theme-column"/);
-    const lines = readLines(r.stdout);
+    expect(readLines(r.stdout).filter((l) => l.cls === 'axial' || l.cls === 'equatorial')).toHaveLength(0);
+    const all = run('chair', sdf, '--hydrogens', 'all');
+    const lines = readLines(all.stdout);
     expect(lines.filter((l) => l.cls === 'axial')).toHaveLength(6);
     expect(lines.filter((l) => l.cls === 'equatorial')).toHaveLength(6);
   });
@@ -35,6 +37,7 @@ describe('conformark chair', () => {
     const bad = run('chair', sdf, '--record', '2', '--view', 'template');
     expect(bad.status).toBe(2);
     expect(bad.stderr).toMatch(/^conformark: .*ring 1 is a twist-boat \(.+\), not a chair: use --view projected\n$/);
+    expect(bad.stderr.startsWith(`conformark: ${sdf}:`)).toBe(true); // the refusal names the file
   });
 
   it('conformark chair --json prints the ring report and the 2D placement', () => {

@@ -73,6 +73,52 @@ describe('conformark newman', () => {
     }
   });
 
+  it('conformark newman takes several bonds: one JSON array, one figure each with -d or an -o pattern, else a usage error', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'conformark-newman-'));
+    try {
+      const json = run('newman', GLUCOSIDE, '--bond', '5-8', '--bond', '1-2,2-3', '--json');
+      expect(json.status).toBe(0);
+      const docs = JSON.parse(json.stdout);
+      expect(docs.map((d: { front: { atom: number }; back: { atom: number } }) => [d.front.atom, d.back.atom])).toEqual([[5, 8], [1, 2], [2, 3]]);
+      // 4 decimals, as every JSON document
+      expect(Math.max(...docs.flatMap((d: { pairs: { torsionDeg: number }[] }) => d.pairs.map((p) => (String(p.torsionDeg).split('.')[1] ?? '').length)))).toBeGreaterThan(2);
+      const d = run('newman', GLUCOSIDE, '--bond', '5-8', '--bond', '1-2', '-d', join(dir, 'figs'));
+      expect(d.status).toBe(0);
+      const a = readFileSync(join(dir, 'figs', 'newman-5-8.svg'), 'utf8');
+      const b = readFileSync(join(dir, 'figs', 'newman-1-2.svg'), 'utf8');
+      expect(a).toContain('id="newman-5-8-');
+      expect(b).toContain('id="newman-1-2-');
+      const o = run('newman', GLUCOSIDE, '--bond', '5-8,1-2', '-o', join(dir, 'fig-{bond}.svg'));
+      expect(o.status).toBe(0);
+      expect(readFileSync(join(dir, 'fig-5-8.svg'), 'utf8')).toBe(a);
+      const bad = run('newman', GLUCOSIDE, '--bond', '5-8', '--bond', '1-2');
+      expect(bad.status).toBe(2);
+      expect(bad.stderr).toBe('conformark: 2 bonds give 2 figures: write them with -d DIR or -o with {bond} in the name, e.g. -o newman-{bond}.svg\n');
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
+  });
+
+  it('conformark newman --couplings and inspect --couplings on a hydrogen-free file say why nothing is predicted', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'conformark-newman-'));
+    try {
+      const heavy = join(dir, 'heavy.xyz');
+      // cyclohexane carbons only (a chair, 1.53 Å bonds)
+      const atoms = Array.from({ length: 6 }, (_, j) => {
+        const t = (j * Math.PI) / 3;
+        return `C ${(1.45 * Math.cos(t)).toFixed(4)} ${(1.45 * Math.sin(t)).toFixed(4)} ${(j % 2 ? 0.25 : -0.25).toFixed(4)}`;
+      });
+      writeFileSync(heavy, `6\ncarbons only\n${atoms.join('\n')}\n`);
+      const n = run('newman', heavy, '--bond', '1-2', '--couplings', '-o', join(dir, 'n.svg'));
+      expect(n.status).toBe(0);
+      expect(n.stderr).toContain('conformark: warning: the file has no hydrogen atoms: ³J(H,H) needs explicit hydrogens, so no couplings are predicted');
+      const i = run('inspect', heavy, '--couplings');
+      expect(i.stdout).toContain('warning: the file has no hydrogen atoms');
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
+  });
+
   it('conformark newman refuses to write over its input', () => {
     const dir = mkdtempSync(join(tmpdir(), 'conformark-newman-'));
     try {

@@ -42,3 +42,16 @@ export function angleGap(a: number, b: number): number {
   const d = Math.abs((((a - b) % 360) + 540) % 360 - 180);
   return d;
 }
+
+/** Every `<path>` with its class and `d`. */
+export function svgPaths(svg: string): { cls: string; d: string }[] {
+  return [...svg.matchAll(/<path\b[^>]*>/g)].map(([tag]) => ({ cls: attr(tag, 'class') ?? '', d: attr(tag, 'd') ?? '' }));
+}
+
+/** The axis-aligned rectangles `Mx0,y0Hx1Vy1Hx0Z` of a path's `d` (other sub-paths skipped), corners sorted. */
+export function pathRects(d: string): { x0: number; y0: number; x1: number; y1: number }[] {
+  return [...d.matchAll(/M(-?[\d.]+),(-?[\d.]+)H(-?[\d.]+)V(-?[\d.]+)H-?[\d.]+Z/g)].map((m) => {
+    const [xa, ya, xb, yb] = m.slice(1).map(Number) as [number, number, number, number];
+    return { x0: Math.min(xa, xb), y0: Math.min(ya, yb), x1: Math.max(xa, xb), y1: Math.max(ya, yb) };
+  });
+}

@@ -19,7 +19,9 @@ type Attrs = Record<string, string | number>;
 function styleAttrs(style: RoleStyle, kind: Primitive, theme: Theme, round: (x: number) => number): Attrs {
   const a: Attrs = {};
   if (style.stroke !== undefined) a.stroke = style.stroke;
-  if (style.strokeWidth !== undefined && kind !== 'text') a['stroke-width'] = round(style.strokeWidth);
+  const strokedText = kind === 'text' && style.stroke !== undefined && style.stroke !== 'none' && style.strokeWidth !== undefined;
+  if (style.strokeWidth !== undefined && (kind !== 'text' || strokedText)) a['stroke-width'] = round(style.strokeWidth);
+  if (strokedText) a['stroke-linejoin'] = 'round';
   if (style.strokeDasharray?.length) a['stroke-dasharray'] = style.strokeDasharray.map(round).join(' ');
   if (style.strokeLinecap !== undefined && kind !== 'text') a['stroke-linecap'] = style.strokeLinecap;
   if (style.fill !== undefined) a.fill = style.fill;

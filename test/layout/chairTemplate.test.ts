@@ -13,7 +13,7 @@ const lineAngle = (a: DrawnLine, b: DrawnLine) => {
 
 // GED-like chair (METHODS.md §2.4, derived), two H per carbon in the local bisector plane (§5 model)
 const chair = ringMolecule(d3dChair(1.536, 111.4).points, { hydrogens: true });
-const fig = chairFigure(chair.mol, { rings: [chair.ring] });
+const fig = chairFigure(chair.mol, { rings: [chair.ring], hydrogens: 'all' });
 const lines = readLines(fig.svg);
 const ringAtoms = fig.ring.atoms.map((a) => a + 1);
 const ringBond = (a: number, b: number) => lines.find((l) => l.cls === 'ring-bond' && l.atoms.join() === `${a},${b}`)!;

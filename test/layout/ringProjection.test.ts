@@ -34,8 +34,8 @@ describe('ringProjection (METHODS.md §10.2 view frame)', () => {
   it('draws the mirror image mirrored: seen edge-on (e = 0) the picture flips about the mean plane, y → −y', () => {
     const tb = ringMolecule(d2TwistBoat(1.536, 111.4), { hydrogens: true });
     const m = mirror(tb.mol);
-    const a = ringProjection(analyzeRing(tb.mol, tb.graph, tb.ring, { ordered: true }), tb.mol, { elevationDeg: 0 });
-    const b = ringProjection(analyzeRing(m, tb.graph, tb.ring, { ordered: true }), m, { elevationDeg: 0 });
+    const a = ringProjection(analyzeRing(tb.mol, tb.graph, tb.ring, { ordered: true }), tb.mol, { elevationDeg: 0, hydrogens: 'all' });
+    const b = ringProjection(analyzeRing(m, tb.graph, tb.ring, { ordered: true }), m, { elevationDeg: 0, hydrogens: 'all' });
     let moved = 0;
     for (const [atom, q] of a.points) {
       const r = b.points.get(atom)!;
@@ -56,7 +56,7 @@ describe('ringProjection (METHODS.md §10.2 view frame)', () => {
     });
     for (const points of [fiveRingAt(0.4, 36), sixRingAt(0.76, 90, 0), sixRingAt(0.6, 50.8, 30), seven]) {
       const r = ringMolecule(points, { hydrogens: true });
-      const fig = chairFigure(r.mol, { rings: [r.ring] });
+      const fig = chairFigure(r.mol, { rings: [r.ring], hydrogens: 'all' });
       expect(fig.view).toBe('projected');
       const lines = readLines(fig.svg);
       expect(lines.filter((l) => l.cls === 'ring-bond')).toHaveLength(points.length);

@@ -1,3 +1,4 @@
+import { TRUE_MIN_OFFSET_DEG } from '../../src/layout/newman/newmanAngles.js';
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { newmanView } from '../../src/analysis/newman.js';
@@ -35,6 +36,13 @@ function pageTorsions(svg: string, m: Molecule, f: number, b: number): { page: n
 }
 const close = (a: number, b: number) => Math.abs((((a - b) % 360) + 540) % 360 - 180);
 
+/**
+ * Page angle against torsion, allowing the one drawn exception: a (nearly) eclipsed back bond is opened to
+ * TRUE_MIN_OFFSET_DEG so it does not start on its front bond, which moves its page angles to every front bond by
+ * that much (torsion values stay measured).
+ */
+const opened = (page: number, ref: number) => Math.min(close(page, ref), Math.abs(close(page, ref) - TRUE_MIN_OFFSET_DEG));
+
 describe('renderSvg (Newman)', () => {
   const cases: [string, Molecule, number, number, number[][]?][] = [
     ['butane anti', butane(180), 1, 2],
@@ -48,7 +56,7 @@ describe('renderSvg (Newman)', () => {
     it(`renderSvg of ${name}: the clockwise page angle from each front bond to each back bond is the torsion within 1°`, () => {
       const pairs = pageTorsions(svgOf(m, f, b, { rings }), m, f, b);
       expect(pairs).toHaveLength(9);
-      for (const p of pairs) expect(close(p.page, p.ref)).toBeLessThan(1);
+      for (const p of pairs) expect(opened(p.page, p.ref)).toBeLessThan(1);
     });
   }
 
@@ -61,7 +69,7 @@ describe('renderSvg (Newman)', () => {
         const m = molecule('random', ['C', 'N', 'O', 'H', 'F', 'H', 'S'], p, [[0, 1], [0, 2], [0, 3], [1, 4], [1, 5], [1, 6]]);
         const svg = svgOf(m, 0, 1);
         expect(svg).not.toMatch(/NaN|Infinity/);
-        for (const q of pageTorsions(svg, m, 0, 1)) expect(close(q.page, q.ref)).toBeLessThan(1);
+        for (const q of pageTorsions(svg, m, 0, 1)) expect(opened(q.page, q.ref)).toBeLessThan(1);
       }),
       { seed: 31337, numRuns: 60 },
     );

@@ -1,7 +1,7 @@
-import { inflateSync } from 'node:zlib';
+import { crc32, inflateSync } from 'node:zlib';
 import { describe, expect, it } from 'vitest';
 import { Resvg } from '@resvg/resvg-js';
-import { renderPng } from '../../src/render/renderPng.js';
+import { pngResolution, renderPng } from '../../src/render/renderPng.js';
 import { renderPdf, svgSizePt } from '../../src/render/renderPdf.js';
 import { NEWMAN_CASES, caseSvg } from '../helpers/newmanGallery.js';
 import { FONT_FILE } from '../../src/render/svgWindow.js';
@@ -23,6 +23,37 @@ describe('renderPng', () => {
     const share = dark / (pixels.length / 4);
     expect(share).toBeGreaterThan(0.01);
     expect(share).toBeLessThan(0.3);
+  });
+
+  it('renderPng(svg, { dpi }) keeps the print size and tags the PNG with its resolution (pHYs read back)', () => {
+    /** Every chunk of a PNG, read here independently of the code under test (PNG spec §5.3: length, type, data, CRC). */
+    const chunks = (png: Uint8Array) => {
+      const out: { type: string; data: Buffer; crcOk: boolean }[] = [];
+      const b = Buffer.from(png);
+      for (let at = 8; at < b.length; ) {
+        const len = b.readUInt32BE(at);
+        const type = b.toString('latin1', at + 4, at + 8);
+        out.push({ type, data: b.subarray(at + 8, at + 8 + len), crcOk: crc32(b.subarray(at + 4, at + 8 + len)) >>> 0 === b.readUInt32BE(at + 8 + len) });
+        at += 12 + len;
+      }
+      return out;
+    };
+    const { width } = svgSizePt(svg);
+    for (const [dpi, expected] of [[undefined, 300], [600, 600], [150, 150]] as const) {
+      const png = renderPng(svg, dpi === undefined ? {} : { dpi });
+      const list = chunks(png);
+      expect(list.every((c) => c.crcOk)).toBe(true);
+      expect(list[0]!.type).toBe('IHDR');
+      const phys = list.filter((c) => c.type === 'pHYs');
+      expect(phys.length).toBe(1);
+      const ppm = phys[0]!.data.readUInt32BE(0);
+      expect(phys[0]!.data.readUInt32BE(4)).toBe(ppm);
+      expect(phys[0]!.data[8]).toBe(1); // unit: metre
+      expect(ppm * 0.0254).toBeCloseTo(expected, 0);
+      // pixels across = width in inches × dpi (a pt is 1/72 in)
+      expect(Math.abs(list[0]!.data.readUInt32BE(0) - (width / 72) * expected)).toBeLessThanOrEqual(1);
+      expect(pngResolution(png)!.x).toBeCloseTo(expected, 0);
+    }
   });
 
   it('renderPng draws text with the shipped font (labels add ink)', () => {

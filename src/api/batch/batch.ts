@@ -4,17 +4,18 @@
  * reported (manifest `errors`, and in the result for stderr) and the rest is written.
  */
 import { availableParallelism } from 'node:os';
-import { ConformarkError, type Warning } from '../../model/errors.js';
+import { ConformarkError, usageError, type Warning } from '../../model/errors.js';
 import type { Molecule } from '../../model/molecule.js';
 import type { StreamOptions } from '../../io/readRecords.js';
 import type { HoldOptions } from '../holdLimits.js';
 import { OutputFolder, type ManifestKind } from '../../io/outputFolder.js';
 import type { BondSet } from '../../analysis/figureBonds.js';
 import type { CouplingOptions } from '../../analysis/coupling.js';
-import type { EnergyOptions } from '../../io/energy.js';
+import { energySpreadWarning, unitRequest, type EnergyOptions } from '../../io/energy.js';
 import type { Theme } from '../../render/theme.js';
 import { loadTheme } from '../../render/themes.js';
 import { prepareRecord } from '../prepare.js';
+import { withFlatInputWarning } from '../flatInput.js';
 import { analyseRecord, recordLabel, type RecordAnalysis } from '../recordAnalysis.js';
 import { goodRecords, type RecordError } from '../recordStream.js';
 import { canDraw, type FigureKind } from '../figures/figureKinds.js';
@@ -29,8 +30,12 @@ import { jsonText } from '../jsonText.js';
 export interface BatchOptions {
   /** Bonds drawn as Newman projections: `ring` (default), `rotatable`, `all`, or a list `1-2,3-4`. */
   readonly bonds?: BondSet | string;
+  /** Also draw ring bonds between two sp² atoms (inside aromatic rings) with `ring`/`all`. Default false. */
+  readonly sp2Bonds?: boolean;
   /** Figure formats, each figure and sheet written in every one. Default `['svg']`. */
   readonly formats?: readonly FigureFormat[];
+  /** PNG resolution, dots per inch. Default 300. */
+  readonly dpi?: number;
   /** Theme object, built-in name or path. Default `column`. */
   readonly theme?: Theme | string;
   /** Prefix before every figure's own id prefix (`<prefix>r01-newman-3-4-`). Default none. */
@@ -145,18 +150,23 @@ async function batchInto(folder: OutputFolder, path: string, theme: Theme, optio
 
   // 1. Read and analyse every record; a bad one becomes an error entry and the batch goes on.
   const analysed: { molecule: Molecule; analysis: RecordAnalysis }[] = [];
+  let refusal: ConformarkError | null = null;
+  const flat = { warned: false };
   for await (const mol of goodRecords(path, options, errors)) {
     try {
       const prepared = prepareRecord(mol);
-      const analysis = analyseRecord(prepared, { bonds: options.bonds, coupling: options.coupling, energy: options.energy });
+      const analysis = analyseRecord(prepared, { bonds: options.bonds, sp2Bonds: options.sp2Bonds, coupling: options.coupling, energy: options.energy });
+      // captions and tables need a unit: refuse rather than guess (thrown past the per-record catch below)
+      if (analysis.energyWithoutUnit !== null) refusal = usageError('energy-unit-unknown', `record ${analysis.record}: ${unitRequest(analysis.energyWithoutUnit)}`, path);
       analysed.push({ molecule: prepared.molecule, analysis });
-      for (const warning of analysis.warnings) warnings.push({ record: analysis.record, warning });
+      for (const warning of withFlatInputWarning(mol, analysis.warnings, flat)) warnings.push({ record: analysis.record, warning });
     } catch (err) {
       if (!(err instanceof ConformarkError)) throw err;
       for (const i of err.issues) {
         errors.push({ record: mol.source.index, code: i.code, file: path, line: i.line ?? mol.source.line, message: `record ${mol.source.index}: ${i.message}` });
       }
     }
+    if (refusal) throw refusal;
   }
 
   // 2. Plan the figures: names from zero-padded record numbers, ids unique per figure.
@@ -167,6 +177,8 @@ async function batchInto(folder: OutputFolder, path: string, theme: Theme, optio
   const width = Math.max(2, String(last).length);
   const energies = analysed.flatMap((r) => (r.analysis.energy ? [r.analysis.energy.kcal] : []));
   const lowest = energies.length > 0 ? energies.reduce((m, e) => Math.min(m, e)) : null;
+  const spread = energySpreadWarning(energies, [...new Set(analysed.flatMap((r) => (r.analysis.energy ? [r.analysis.energy.unit] : [])))].join(', '));
+  if (spread) warnings.push({ record: analysed.filter((r) => r.analysis.energy).pop()!.analysis.record, warning: spread });
   const drawRings = canDraw('ring');
   if (!drawRings && analysed.some((r) => r.analysis.rings.length > 0)) notes.push('ring figures are not drawn: this build has no ring renderer');
   const planned = analysed.map((r) => plan(r.analysis, width, prefix, lowest, drawRings));
@@ -177,7 +189,7 @@ async function batchInto(folder: OutputFolder, path: string, theme: Theme, optio
   const threads = total > (options.workerThreshold ?? 40) ? (options.jobs ?? Math.min(4, availableParallelism())) : 1;
   let done = 0;
   options.onProgress?.(0, total);
-  const drawn = await drawTasks(tasks, { theme, formats: formats.filter((f) => f !== 'svg') }, threads, (n) => {
+  const drawn = await drawTasks(tasks, { theme, formats: formats.filter((f) => f !== 'svg'), dpi: options.dpi }, threads, (n) => {
     done += n;
     options.onProgress?.(done, total);
   });
@@ -204,7 +216,7 @@ async function batchInto(folder: OutputFolder, path: string, theme: Theme, optio
       });
       for (const format of formats) {
         const file = `sheet-${s + 1}.${format}`;
-        folder.write(file, await figureBytes(svg, format));
+        folder.write(file, await figureBytes(svg, format, { dpi: options.dpi }));
         figures.push({ record: null, kind: 'sheet', bond: null, ring: null, path: file });
       }
     }

@@ -39,6 +39,8 @@ export interface DrawnJob {
 export interface DrawSettings {
   readonly theme: Theme;
   readonly formats: readonly FigureFormat[];
+  /** PNG resolution, dots per inch. Default 300. */
+  readonly dpi?: number;
 }
 
 /** Draws every figure of one record (the unit of work on a worker). */
@@ -48,7 +50,7 @@ export async function drawRecordFigures(task: RecordTask, settings: DrawSettings
   for (const job of task.jobs) {
     const fig = drawFigure(job.kind, { ...prepared, theme: settings.theme, idPrefix: job.idPrefix }, job);
     const files = [];
-    for (const format of settings.formats) files.push({ format, data: await figureBytes(fig.svg, format) });
+    for (const format of settings.formats) files.push({ format, data: await figureBytes(fig.svg, format, { dpi: settings.dpi }) });
     out.push({ svg: fig.svg, width: fig.width, height: fig.height, files });
   }
   return out;

@@ -11,13 +11,14 @@ import { ConformarkError, usageError, type Warning } from '../../model/errors.js
 import type { Molecule } from '../../model/molecule.js';
 import type { StreamOptions } from '../../io/readRecords.js';
 import type { HoldOptions } from '../holdLimits.js';
-import { findEnergy, normalizeEnergyUnit, type EnergyOptions } from '../../io/energy.js';
+import { energySpreadWarning, findEnergy, normalizeEnergyUnit, unitRequest, UNIT_SOURCE_WORDS, type EnergyOptions } from '../../io/energy.js';
 import { toKcalPerMol } from '../../model/energyUnits.js';
 import { boltzmannPopulations, ensembleAverage } from '../../analysis/boltzmann.js';
 import { findDuplicates } from '../../analysis/duplicates.js';
 import { analyzeRing } from '../../analysis/ringAnalysis.js';
 import { isSkippedCoupling, ringCouplings, type Coupling, type CouplingMethod, type CouplingOptions } from '../../analysis/coupling.js';
 import { prepareRecord, type PreparedRecord } from '../prepare.js';
+import { withFlatInputWarning } from '../flatInput.js';
 import { goodRecords, type RecordError } from '../recordStream.js';
 
 /** Options of {@link ensembleFile} / {@link ensembleOf}. */
@@ -104,11 +105,16 @@ export function ensembleOf(molecules: readonly Molecule[], options: EnsembleOpti
   const rows = molecules.map((mol) => {
     const e = findEnergy(mol, options.energy);
     if (!e) throw usageError('no-energy', `record ${mol.source.index} has no energy (name the field with the energy field option)`, mol.source.file);
-    if (e.warning) warnings.push({ record: mol.source.index, warning: e.warning });
-    return { mol, energy: toKcalPerMol(e.value, e.unit), unit: e.unit, field: e.field, g: degeneracyOf(mol, options.degeneracyField) };
+    // populations need a unit: refuse rather than guess
+    if (e.unit === null) throw usageError('energy-unit-unknown', `record ${mol.source.index}: ${unitRequest(e.field)}`, mol.source.file);
+    return { mol, energy: toKcalPerMol(e.value, e.unit), unit: e.unit, unitFrom: e.unitFrom!, field: e.field, g: degeneracyOf(mol, options.degeneracyField) };
   });
   rows.sort((a, b) => a.energy - b.energy || a.mol.source.index - b.mol.source.index);
   if (rows.length === 0) throw usageError('no-records', 'no records with energies to rank');
+  const flat = { warned: false };
+  for (const r of rows) for (const warning of withFlatInputWarning(r.mol, [], flat)) warnings.push({ record: r.mol.source.index, warning });
+  const spread = energySpreadWarning(rows.map((r) => r.energy), [...new Set(rows.map((r) => r.unit))].join(', '));
+  if (spread) warnings.push({ record: rows[rows.length - 1]!.mol.source.index, warning: spread });
   // 2. Duplicates among records with the same atoms in the same order.
   const comparable = sameAtoms(rows.map((r) => r.mol));
   const dup = comparable ? findDuplicates(rows.map((r) => r.mol), { rmsdThresholdA: threshold, energies: rows.map((r) => r.energy), energyWindow: ENERGY_WINDOW_KCAL }) : rows.map(() => null);
@@ -142,6 +148,9 @@ export function ensembleOf(molecules: readonly Molecule[], options: EnsembleOpti
       : `populations from energies (field ${fields.map((f) => `'${f}'`).join(', ')}), not free energies: entropy differences between conformers are ignored`,
   );
   if (units.some((u) => u !== 'kcal/mol')) notes.push(`energies converted to kcal/mol from ${units.join(', ')}`);
+  const sources = [...new Set(rows.map((r) => r.unitFrom))];
+  notes.push(`energy unit ${sources.map((u) => UNIT_SOURCE_WORDS[u]).join('; ')}`);
+  if (spread) notes.push(spread.message);
   notes.push(options.degeneracyField === undefined ? 'degeneracy 1 for every record (no degeneracy field given)' : `degeneracies from field '${options.degeneracyField}'`);
   notes.push(
     comparable
@@ -184,16 +193,20 @@ export async function ensembleFile(path: string, options: EnsembleOptions = {}):
   }
   const errors: RecordError[] = [];
   const good: Molecule[] = [];
+  let refusal: ConformarkError | null = null;
   for await (const mol of goodRecords(path, options, errors)) {
     try {
-      if (!findEnergy(mol, options.energy)) throw usageError('no-energy', `record ${mol.source.index} has no energy; it is left out`);
+      const e = findEnergy(mol, options.energy);
+      if (!e) throw usageError('no-energy', `record ${mol.source.index} has no energy; it is left out`);
       degeneracyOf(mol, options.degeneracyField);
       good.push(mol);
+      if (e.unit === null) refusal = usageError('energy-unit-unknown', `record ${mol.source.index}: ${unitRequest(e.field)}`, path);
     } catch (err) {
       if (!(err instanceof ConformarkError)) throw err;
       const issue = err.issues[0]!;
       errors.push({ record: mol.source.index, code: issue.code, file: path, line: mol.source.line, message: issue.message });
     }
+    if (refusal) throw refusal;
   }
   if (good.length === 0) {
     const why = errors[0] ? `: ${errors[0].message}` : '';

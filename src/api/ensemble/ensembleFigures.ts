@@ -54,7 +54,7 @@ export function writeEnsembleFigures(result: EnsembleResult, dir: string, option
     const what = panelTarget(p);
     if (!what) return;
     // a sheet of many conformers: ring hydrogens left out so the heavy substituents' positions stand out
-    const fig = drawFigure(what.kind, { ...p, theme, idPrefix: `${prefix}${label(c.record)}-`, ringHydrogens: 'hide' }, what.target);
+    const fig = drawFigure(what.kind, { ...p, theme, idPrefix: `${prefix}${label(c.record)}-`, ringHydrogens: 'none' }, what.target);
     const caption = [`${label(c.record)} ${c.title}`.trim(), `ΔE ${fixed(c.relativeEnergy, 2)} kcal/mol, ${percentText(c.population)}`];
     panels.push({ svg: fig.svg, width: fig.width, height: fig.height, caption });
   });

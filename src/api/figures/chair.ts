@@ -1,10 +1,12 @@
 /** One call from a molecule to a themed ring figure: pick the ring, analyse it, place it, lay it out, render. */
 import type { Molecule } from '../../model/molecule.js';
-import { usageError, type Warning } from '../../model/errors.js';
+import { ConformarkError, usageError, type Warning } from '../../model/errors.js';
 import { buildGraph, type Graph } from '../../perceive/graph.js';
 import { withBonds } from '../../perceive/withBonds.js';
 import { findRings } from '../../perceive/findRings.js';
 import { analyzeRing, type AnalyzeRingOptions, type RingAnalysis } from '../../analysis/ringAnalysis.js';
+import { chemicalNumbering, chemicalRingOrder } from '../../analysis/chemicalNumbering.js';
+import { legibilityWarnings } from './legibilityWarnings.js';
 import { chairTemplate } from '../../layout/ring/chairTemplate.js';
 import { ringProjection } from '../../layout/ring/ringProjection.js';
 import { layoutRing } from '../../layout/ring/ringLayout.js';
@@ -27,9 +29,9 @@ export interface ChairFigureOptions {
   readonly ordered?: boolean;
   /** `template` (trade chair, chairs only) or `projected` (true view, any ring). Default: template for chairs, else projected. */
   readonly view?: RingView;
-  /** Viewer elevation above the ring's mean plane, degrees. Default 20. */
+  /** Viewer elevation above the ring's mean plane, degrees (projected view only; giving it picks that view). Default 20. */
   readonly elevationDeg?: number;
-  /** Draw hydrogens on ring atoms. Default `show`. */
+  /** Ring hydrogens drawn: `all`, `stereo` (only where they show a configuration) or `none`. Default `stereo`. */
   readonly hydrogens?: RingHydrogens;
   /** Label text: `element` (condensed groups and ring locants), `id` (element + number) or `name`. Default `element`. */
   readonly labels?: RingLabels;
@@ -68,16 +70,39 @@ export function chairFigure(mol: Molecule, options: ChairFigureOptions = {}): Ch
   const graph = options.graph ?? graphOf(mol);
   const rings = options.rings ?? findRings(graph);
   const { atoms, id } = pickRing(mol, rings, options.ring);
-  const ring = analyzeRing(mol, graph, atoms, { ...options.analysis, ...(id === undefined ? {} : { id }), ordered: options.ordered ?? false });
+  // chemical numbering (carbohydrate convention, lowest locants) names the drawn atoms; a ring that is not a
+  // sugar ring is analysed in that numbering too, so the caption's descriptor uses the locants on the drawing
+  const numbering = chemicalNumbering(mol, graph, rings);
+  const chemical = options.ordered || options.labels === 'id' || options.labels === 'name' ? null : chemicalRingOrder(numbering, graph, atoms);
+  const ring = analyzeRing(mol, graph, chemical?.atoms ?? atoms, {
+    ...options.analysis,
+    ...(id === undefined ? {} : { id }),
+    ordered: options.ordered ?? chemical !== null,
+    ...(chemical ? { locants: chemical.locants, numberingRule: chemical.rule } : {}),
+  });
   // 2. View and placement.
-  const view = options.view ?? (ring.shape === 'chair' ? 'template' : 'projected');
-  const placeOptions = { elevationDeg: options.elevationDeg, hydrogens: options.hydrogens };
-  const placement = view === 'template' ? chairTemplate(ring, mol, placeOptions) : ringProjection(ring, mol, placeOptions);
+  const view = options.view ?? (ring.shape === 'chair' && ring.size === 6 && options.elevationDeg === undefined ? 'template' : 'projected');
+  if (view === 'template' && options.elevationDeg !== undefined) {
+    throw usageError('bad-option', 'the chair template is a fixed outline: an elevation applies to the projected view only');
+  }
+  const placement = view === 'template'
+    ? inFile(mol, () => chairTemplate(ring, mol, { hydrogens: options.hydrogens }))
+    : ringProjection(ring, mol, { elevationDeg: options.elevationDeg, hydrogens: options.hydrogens });
   // 3. Layout and rendering with the theme (a background-coloured halo role added when the theme has none).
   const theme = withHalo(loadTheme(options.theme));
-  const scene = layoutRing(placement, ring, mol, graph, { labels: options.labels, caption: options.caption, metrics: sceneMetrics(theme), measure: measureText });
+  const scene = layoutRing(placement, ring, mol, graph, { labels: options.labels, caption: options.caption, metrics: sceneMetrics(theme), measure: measureText, names: numbering.names, rings });
   const svg = renderSvg(scene, theme, { idPrefix: options.idPrefix ?? 'chair-' });
-  return { svg, ring, scene, view, placement, warnings: ring.warnings };
+  return { svg, ring, scene, view, placement, warnings: [...ring.warnings, ...legibilityWarnings(scene)] };
+}
+
+/** Runs `f`; a user error without a file (the layout's chair refusal) gets the record's file and line. */
+function inFile<T>(mol: Molecule, f: () => T): T {
+  try {
+    return f();
+  } catch (err) {
+    if (!(err instanceof ConformarkError) || err.issues.some((i) => i.file)) throw err;
+    throw new ConformarkError(err.issues.map((i) => ({ ...i, file: mol.source.file, line: i.line ?? mol.source.line })));
+  }
 }
 
 function graphOf(mol: Molecule): Graph {
@@ -108,3 +133,4 @@ function withHalo(theme: Theme): Theme {
   const stroke = theme.background === 'none' ? '#ffffff' : theme.background;
   return { ...theme, roles: { ...theme.roles, 'bond-halo': { stroke, strokeWidth: 3 * width, strokeLinecap: 'butt' } } };
 }
+

@@ -24,8 +24,8 @@ export interface FigureContext {
   readonly theme: Theme;
   /** Id prefix of this figure (unique on a page). */
   readonly idPrefix: string;
-  /** Hydrogens on ring atoms in ring figures: `show` (default) or `hide` (small panels read better without). */
-  readonly ringHydrogens?: 'show' | 'hide';
+  /** Hydrogens on ring atoms in ring figures: `all`, `stereo` (default) or `none` (small panels read better without). */
+  readonly ringHydrogens?: 'all' | 'stereo' | 'none';
 }
 
 /** A drawn figure: SVG text and its size in the theme's unit. */

@@ -3,7 +3,7 @@ import type { Molecule } from '../../model/molecule.js';
 import { usageError, type Warning } from '../../model/errors.js';
 import { buildGraph, type Graph } from '../../perceive/graph.js';
 import { newmanView, type NewmanView } from '../../analysis/newman.js';
-import { couplingsAcrossBond, isSkippedCoupling, type Coupling, type CouplingOptions } from '../../analysis/coupling.js';
+import { couplingsAcrossBond, isSkippedCoupling, noHydrogenWarning, type Coupling, type CouplingOptions } from '../../analysis/coupling.js';
 import { layoutNewman, type NewmanLayoutOptions } from '../../layout/newman/newmanLayout.js';
 import type { Scene } from '../../layout/scene.js';
 import type { Theme } from '../../render/theme.js';
@@ -11,6 +11,11 @@ import { loadTheme, sceneMetrics } from '../../render/themes.js';
 import { measureText } from '../../render/svgWindow.js';
 import { renderSvg } from '../../render/renderSvg.js';
 import { sceneTextWarnings } from '../../layout/text/safeText.js';
+import { findRings } from '../../perceive/findRings.js';
+import { chemicalNumbering } from '../../analysis/chemicalNumbering.js';
+import { hydroxymethylRotamer } from '../../analysis/hydroxymethylRotamer.js';
+import { torsionText } from '../../layout/newman/newmanText.js';
+import { legibilityWarnings } from './legibilityWarnings.js';
 
 /** Options of {@link newmanFigure}. Atom indices are 0-based. */
 export interface NewmanFigureOptions extends Omit<NewmanLayoutOptions, 'metrics' | 'measure' | 'couplings'> {
@@ -57,9 +62,17 @@ export function newmanFigure(mol: Molecule, options: NewmanFigureOptions): Newma
         (c): c is Coupling => !isSkippedCoupling(c),
       )
     : [];
-  const scene = layoutNewman(view, mol, { ...options, couplings, metrics: sceneMetrics(theme), measure: measureText });
+  // chemical numbering names ring neighbours and captions (C1–C2, ³J(H1,H2)); a pyranose C5–C6 bond also
+  // gets its hydroxymethyl rotamer (gg/gt/tg)
+  const rings = options.rings ?? findRings(graph);
+  const { names } = chemicalNumbering(mol, graph, rings);
+  const bondNames = [names.get(front), names.get(back)].sort().join('–');
+  const rotamer = bondNames === 'C5–C6' ? hydroxymethylRotamer(mol, names) : null;
+  const notes = rotamer ? [`hydroxymethyl ${rotamer.rotamer} (O5–C5–C6–O6 ${torsionText(rotamer.o5Deg)}, C4–C5–C6–O6 ${torsionText(rotamer.c4Deg)})`] : [];
+  const scene = layoutNewman(view, mol, { ...options, couplings, metrics: sceneMetrics(theme), measure: measureText, graph, names, rings, notes });
   const svg = renderSvg(scene, theme, { idPrefix: options.idPrefix });
-  const warnings = [...view.warnings, ...couplings.flatMap((c) => c.warnings), ...sceneTextWarnings(scene)];
+  const noH = options.couplings ? noHydrogenWarning(mol) : null;
+  const warnings = [...view.warnings, ...couplings.flatMap((c) => c.warnings), ...(noH ? [noH] : []), ...sceneTextWarnings(scene), ...legibilityWarnings(scene)];
   return { svg, view, scene, warnings, couplings };
 }
 

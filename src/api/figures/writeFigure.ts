@@ -17,8 +17,8 @@ export type FigureFormat = typeof FIGURE_FORMATS extends Map<infer K, unknown> ?
 export interface WriteFigureOptions {
   /** Output format. Default: from the extension of `path` (`.svg`, `.png`, `.pdf`). */
   readonly format?: FigureFormat;
-  /** PNG zoom over the SVG's CSS pixel size. Default 4. */
-  readonly pngScale?: number;
+  /** PNG resolution, dots per inch (the figure keeps its print size). Default 300. */
+  readonly dpi?: number;
 }
 
 /** Format of an output path from its extension; a clear error for anything else. */
@@ -29,9 +29,9 @@ export function figureFormat(path: string): FigureFormat {
 }
 
 /** The bytes of an SVG figure in the given format. */
-export async function figureBytes(svg: string, format: FigureFormat, options: { pngScale?: number } = {}): Promise<string | Uint8Array> {
+export async function figureBytes(svg: string, format: FigureFormat, options: { readonly dpi?: number } = {}): Promise<string | Uint8Array> {
   if (format === 'svg') return svg.endsWith('\n') ? svg : `${svg}\n`;
-  if (format === 'png') return renderPng(svg, { scale: options.pngScale });
+  if (format === 'png') return renderPng(svg, options.dpi === undefined ? {} : { dpi: options.dpi });
   return renderPdf(svg);
 }
 

@@ -6,6 +6,7 @@ import type { FormatName, Molecule } from '../../model/molecule.js';
 import type { Warning } from '../../model/errors.js';
 import { readRecords, type StreamOptions } from '../../io/readRecords.js';
 import { detectFormat } from '../../io/detectFormat.js';
+import { withFlatInputWarning } from '../flatInput.js';
 import { findEnergy, type EnergyOptions } from '../../io/energy.js';
 import { recordReport, type RecordReport, type RecordReportOptions } from '../../analysis/recordReport.js';
 import { prepareRecord } from '../prepare.js';
@@ -42,7 +43,7 @@ export function inspectMolecule(mol: Molecule, options: InspectOptions = {}): Re
   if (energy?.warning) warnings.push(energy.warning);
   return {
     ...report,
-    energy: energy ? { value: energy.value, unit: energy.unit, field: energy.field } : null,
+    energy: energy ? { value: energy.value, unit: energy.unit, unitFrom: energy.unitFrom, field: energy.field } : null,
     warnings,
   };
 }
@@ -53,10 +54,12 @@ export function inspectMolecule(mol: Molecule, options: InspectOptions = {}): Re
  */
 export async function inspectFile(path: string, options: InspectOptions = {}): Promise<InspectReport> {
   const records: RecordReport[] = [];
+  const flat = { warned: false };
   let format: FormatName | null = options.read?.format ?? null;
   for await (const mol of heldRecords(readRecords(path, options.read), path, options.hold)) {
     format ??= mol.source.format;
-    records.push(inspectMolecule(mol, options));
+    const report = inspectMolecule(mol, options);
+    records.push({ ...report, warnings: withFlatInputWarning(mol, report.warnings, flat) });
   }
   return { schema: 'conformark/report@1', source: { path, format: format ?? detectFormat(path) }, records };
 }

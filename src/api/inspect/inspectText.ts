@@ -32,7 +32,7 @@ function recordText(record: RecordReport): string {
     `${record.bonds.length} bonds ${perceived ? 'perceived from coordinates' : 'from the file'}`,
     `${nr} ring${nr === 1 ? '' : 's'}`,
   ];
-  if (record.energy) facts.push(`energy ${record.energy.value} ${record.energy.unit} (${record.energy.field})`);
+  if (record.energy) facts.push(`energy ${record.energy.value} ${record.energy.unit ?? '(unit unknown)'} (${record.energy.field})`);
   // titles come from files: no terminal control sequences, bounded length
   const title = safeText(record.title).text;
   const lines = [`record ${record.index}${title ? `  "${title}"` : ''}`, `  ${facts.join(' · ')}`];
@@ -49,6 +49,14 @@ function recordText(record: RecordReport): string {
   return lines.join('\n');
 }
 
+/** How τm was found, in the text report. */
+const TAU_METHOD_WORDS = {
+  'closed-form': 'closed form',
+  'least-squares': 'least-squares fit',
+  blended: 'closed form blended with fit',
+  fourier: 'Fourier form',
+} as const;
+
 function ringText(record: RecordReport, ring: ReportRing): string[] {
   const p = ring.puckering;
   const shape = [ring.shape, ring.descriptor ?? ''].filter(Boolean).join(' ');
@@ -56,7 +64,8 @@ function ringText(record: RecordReport, ring: ReportRing): string[] {
   if (ring.size === 6) numbers.push(`θ ${fixed(p.thetaDeg, 1, '°')}`);
   numbers.push(`φ ${fixed(p.phiDeg, 1, '°')}`);
   if (ring.pseudorotation) {
-    numbers.push(`P ${ring.pseudorotation.phaseDeg.toFixed(1)}°`, `τm ${ring.pseudorotation.amplitudeDeg.toFixed(1)}°`);
+    const pr = ring.pseudorotation;
+    numbers.push(`P ${pr.phaseDeg.toFixed(1)}°`, `τm ${pr.amplitudeDeg.toFixed(1)}° (${TAU_METHOD_WORDS[pr.method]})`);
   }
   const out = [
     `  ring ${ring.id ?? '?'} (${ring.size} atoms): ${ring.atoms.map((a) => atomLabel(record, a)).join('-')}`,

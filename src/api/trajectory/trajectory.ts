@@ -44,6 +44,8 @@ export interface TrajectoryOptions extends RingShapeOptions {
   readonly torsions?: readonly string[];
   /** Figure formats written for each figure. Default `['svg']`. */
   readonly formats?: readonly FigureFormat[];
+  /** PNG resolution, dots per inch. Default 300. */
+  readonly dpi?: number;
   /** Theme object, built-in name or path. Default `column`. */
   readonly theme?: Theme | string;
   /** Bond tolerance for perception on frame 1, Å. Default 0.40. */
@@ -251,6 +253,6 @@ async function analyseInto(folder: OutputFolder, path: string, first: Molecule, 
     torsions: setup.torsionColumns,
     warnings,
   };
-  const files = await writeTrajectoryFiles(folder, summary, plots, setup, { formats: options.formats ?? ['svg'], theme: options.theme, timestep });
+  const files = await writeTrajectoryFiles(folder, summary, plots, setup, { formats: options.formats ?? ['svg'], theme: options.theme, timestep, dpi: options.dpi });
   return { ...summary, files: ['puckering.csv', ...files] };
 }

@@ -13,7 +13,7 @@ import { layoutTimeSeries, type SeriesSpec } from '../../layout/plots/timeSeries
 import { layoutOccupancy } from '../../layout/plots/occupancyLayout.js';
 import type { Timestep } from './timestep.js';
 import type { TrajectorySetup } from './trajectorySetup.js';
-import type { TrajectoryPlots } from './trajectoryPlots.js';
+import { PHI_THETA_MIN, type TrajectoryPlots } from './trajectoryPlots.js';
 import { SHAPE_ORDER, withTrajectoryRoles } from './trajectoryTheme.js';
 
 /** Figure options of a run. */
@@ -21,20 +21,27 @@ export interface TrajectoryFigureOptions {
   readonly formats: readonly FigureFormat[];
   readonly theme?: Theme | string;
   readonly timestep: Timestep | null;
+  /** PNG resolution, dots per inch. Default 300. */
+  readonly dpi?: number;
 }
 
-const angle = (label: string, max: number, step: number, wraps: boolean): SeriesSpec => ({
-  label, min: 0, max, wraps, ticks: Array.from({ length: max / step + 1 }, (_, i) => i * step),
+const angle = (label: string, max: number, step: number, wraps: boolean, extra: Partial<SeriesSpec> = {}): SeriesSpec => ({
+  label, min: 0, max, wraps, ticks: Array.from({ length: max / step + 1 }, (_, i) => i * step), ...extra,
 });
 
 /** Series shown in the time series for a ring size. */
 export function seriesSpecs(size: number, plots: TrajectoryPlots): SeriesSpec[] {
-  if (size === 6) return [angle('θ (°)', 180, 45, false), angle('φ (°)', 360, 90, true)];
-  if (size === 5) return [angle('P (°)', 360, 90, true), angle('τm (°)', plots.maxAmplitudeDeg, 20, false)];
+  const bins = plots.series.binning;
+  const binning = (i: number) => (bins[i] ? { binning: bins[i] } : {});
+  if (size === 6) {
+    const note = `grey: φ where θ < ${PHI_THETA_MIN}° or > ${180 - PHI_THETA_MIN}° (near a chair, φ is set by noise)`;
+    return [angle('θ (°)', 180, 45, false, binning(0)), angle('φ (°)', 360, 90, true, { ...binning(1), muted: { index: 2, note } })];
+  }
+  if (size === 5) return [angle('P (°)', 360, 90, true, binning(0)), angle('τm (°)', plots.maxAmplitudeDeg, 20, false, binning(1))];
   let qMax = 0.2;
   for (const b of plots.series.buckets()) qMax = Math.max(qMax, b.ranges[0]?.[1] ?? 0);
   const top = Math.ceil(qMax * 10) / 10;
-  return [{ label: 'Q (Å)', min: 0, max: top, wraps: false, ticks: [0, top / 2, top] }, angle('φ₂ (°)', 360, 90, true)];
+  return [{ label: 'Q (Å)', min: 0, max: top, wraps: false, ticks: [0, top / 2, top], ...binning(0) }, angle('φ₂ (°)', 360, 90, true, binning(1))];
 }
 
 /** The scenes of a run: map (six- and five-rings only), time series, occupancy. */
@@ -69,7 +76,7 @@ export async function writeTrajectoryFiles(
   }
   for (const [name, svg] of figures) {
     for (const format of options.formats) {
-      folder.write(`${name}.${format}`, await figureBytes(svg, format));
+      folder.write(`${name}.${format}`, await figureBytes(svg, format, { dpi: options.dpi }));
       files.push(`${name}.${format}`);
     }
   }

@@ -11,13 +11,15 @@ import {
   type FigureFormat,
   type TableFormat,
 } from '../../index.js';
-import { limitsOf, oneOf, printWarnings, wholeNumber } from '../options.js';
+import { limitsOf, oneOf, printWarnings, wholeNumber, DPI_HELP, dpiOption } from '../options.js';
 
 interface BatchFlags {
   dir: string;
   bonds?: string;
+  sp2Bonds?: boolean;
   formats?: string;
   theme?: string;
+  dpi?: string;
   idPrefix?: string;
   sheet?: boolean;
   tables?: string;
@@ -39,14 +41,16 @@ export function registerBatch(program: Command): void {
     .argument('<file>', 'coordinate file (XYZ, SDF/molfile, PDB; .gz read transparently; - for standard input)')
     .requiredOption('-d, --dir <dir>', 'output folder (created if needed)')
     .option('--bonds <set>', `bonds drawn as Newman projections: ${[...BOND_SETS.keys()].join(', ')}, or a list such as 1-2,3-4 (default ring)`)
+    .option('--sp2-bonds', 'also draw ring bonds between two sp² atoms (inside aromatic rings), left out by default')
     .option('--formats <list>', `figure formats, comma-separated: ${[...FIGURE_FORMATS.keys()].join(', ')} (default svg)`)
+    .option('--dpi <n>', DPI_HELP)
     .option('--theme <name|path>', 'column (print), projector (slides), contrast (colour-blind-safe), or a theme .json file (default column)')
     .option('--id-prefix <p>', 'put before every figure\'s own id prefix, to keep figures of several batches apart on one page')
     .option('--no-sheet', 'write no contact sheet')
     .option('--tables <list>', `table formats, comma-separated: ${[...TABLE_FORMATS.keys()].join(', ')}, or none (default csv,md,tex)`)
     .option('--jobs <n>', 'worker threads for figures, used above 40 figures (default min(4, cores))')
     .option('--energy-field <name>', 'SD field or XYZ key holding the energy (default: the first whose name contains "energy")')
-    .option('--energy-unit <unit>', 'unit of the energies: kcal/mol, kJ/mol, hartree, eV (default: from the field name)')
+    .option('--energy-unit <unit>', 'unit of the energies: kcal/mol, kJ/mol, hartree, eV (default: from the value, the field name or the file\'s convention; never guessed)')
     .action(async (file: string, flags: BatchFlags, command: Command) => {
       const { read, hold } = limitsOf(command);
       protectInput(file);
@@ -56,7 +60,7 @@ export function registerBatch(program: Command): void {
       const bar = process.stderr.isTTY ? new cliProgress.SingleBar({ format: 'figures {bar} {value}/{total}', stream: process.stderr }, cliProgress.Presets.shades_classic) : null;
       let started = false;
       const result = await batchFile(file, flags.dir, {
-        bonds: flags.bonds, formats, tables, jobs, theme: flags.theme, idPrefix: flags.idPrefix, sheet: flags.sheet !== false,
+        bonds: flags.bonds, sp2Bonds: flags.sp2Bonds === true, formats, tables, jobs, theme: flags.theme, dpi: dpiOption(flags.dpi), idPrefix: flags.idPrefix, sheet: flags.sheet !== false,
         energy: { field: flags.energyField, unit: flags.energyUnit },
         read, hold,
         onProgress: bar

@@ -10,12 +10,13 @@ import {
   toReportRing,
   writeAtomic,
   writeFigure,
-  type RingHydrogens,
+  ringHydrogenMode,
+  usageError,
   type RingLabels,
   type RingView,
   jsonText,
 } from '../../index.js';
-import { finiteNumber, limitsOf, oneOf, printWarnings, wholeNumber } from '../options.js';
+import { finiteNumber, limitsOf, oneOf, printWarnings, wholeNumber, DPI_HELP, dpiOption } from '../options.js';
 
 interface ChairFlags {
   ring?: string;
@@ -29,6 +30,7 @@ interface ChairFlags {
   idPrefix?: string;
   json?: boolean;
   output?: string;
+  dpi?: string;
 }
 
 /** Adds the `chair` command to the program. */
@@ -40,13 +42,14 @@ export function registerChair(program: Command): void {
     .option('--ring <R>', 'ring number as inspect lists it, or an ordered atom list such as 1-2-3-4-5-6 or O5-C1-C2-C3-C4-C5 (default: the first six-ring, else the first ring)')
     .option('--record <n>', 'record (frame) to draw, counted from 1 (default 1)')
     .option('--view <mode>', 'template (trade chair; chairs only) or projected (true view of any ring) (default: template for chairs, else projected)')
-    .option('--elevation <deg>', 'viewer elevation above the ring plane in degrees, -90 to 90 (default 26 for template, 20 for projected)')
-    .option('--hydrogens <mode>', 'show or hide the hydrogens on ring atoms (default show)')
+    .option('--elevation <deg>', 'viewer elevation above the ring plane in degrees, -90 to 90, for the projected view (giving it picks that view) (default 20)')
+    .option('--hydrogens <mode>', 'ring hydrogens drawn: all, stereo (only an H that shows a configuration: at a ring atom with one heavy substituent) or none (default stereo)')
     .option('--labels <mode>', 'element (groups such as OH, CH₂OH, and ring locants), id (element + number) or name (atom names from the file) (default element)')
     .option('--no-caption', 'leave out the caption (shape, descriptor, Q/θ/φ)')
     .option('--theme <name|path>', 'column (print), projector (slides), contrast (colour-blind-safe), or a theme .json file (default column)')
     .option('--id-prefix <p>', 'prefix for ids inside the SVG, to keep several figures on one page apart (default chair-)')
     .option('--json', 'print the ring analysis and the 2D placement (conformark/chair@1) instead of a figure')
+    .option('--dpi <n>', DPI_HELP)
     .option('-o, --output <file>', 'write to FILE (.svg, .png or .pdf; .json with --json) instead of standard output')
     .action(async (file: string, flags: ChairFlags, command: Command) => {
       const { read } = limitsOf(command);
@@ -59,7 +62,7 @@ export function registerChair(program: Command): void {
         graph, rings, ring, ordered,
         view: flags.view === undefined ? undefined : oneOf<RingView>('--view', flags.view, ['template', 'projected'], 'template'),
         elevationDeg: flags.elevation === undefined ? undefined : finiteNumber('--elevation', flags.elevation, -90, 90),
-        hydrogens: oneOf<RingHydrogens>('--hydrogens', flags.hydrogens, ['show', 'hide'], 'show'),
+        hydrogens: hydrogensFlag(flags.hydrogens),
         labels: oneOf<RingLabels>('--labels', flags.labels, ['element', 'id', 'name'], 'element'),
         caption: flags.caption !== false,
         theme: flags.theme,
@@ -73,7 +76,14 @@ export function registerChair(program: Command): void {
         else process.stdout.write(text);
         return;
       }
-      if (flags.output) await writeFigure(flags.output, figure.svg);
+      if (flags.output) await writeFigure(flags.output, figure.svg, { dpi: dpiOption(flags.dpi) });
       else process.stdout.write(`${figure.svg}\n`);
     });
+}
+
+/** `--hydrogens all|stereo|none` (the earlier `show` and `hide` still read as `all` and `none`). */
+function hydrogensFlag(word: string | undefined) {
+  const mode = ringHydrogenMode(word);
+  if (!mode) throw usageError('bad-option', `--hydrogens expects one of all, stereo, none, got "${word}"`);
+  return mode;
 }

@@ -23,7 +23,7 @@ export function registerEnsemble(program: Command): void {
     .argument('<file>', 'coordinate file with an energy per record (SD field or XYZ comment)')
     .option('--temperature <K>', 'temperature for the populations, K (default 298.15)')
     .option('--energy-field <name>', 'SD field or XYZ key holding the energy (default: the first whose name contains "energy")')
-    .option('--energy-unit <unit>', 'unit of the energies: kcal/mol, kJ/mol, hartree, eV (default: from the field name)')
+    .option('--energy-unit <unit>', 'unit of the energies: kcal/mol, kJ/mol, hartree, eV (default: from the value, the field name or the file\'s convention; never guessed)')
     .option('--degeneracy-field <name>', 'SD field or XYZ key holding each record\'s degeneracy (default: 1 for every record)')
     .option('--rmsd <A>', 'heavy-atom RMSD at or below which two records are duplicates, Å (default 0.125)')
     .option('--json', 'print the report (conformark/ensemble@1) instead of the table')

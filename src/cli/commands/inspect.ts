@@ -26,7 +26,7 @@ export function registerInspect(program: Command): void {
     .option('--couplings', 'add predicted ³J(H,H) for every ring H–C–C–H')
     .option('--karplus <form>', `coupling equation: ${COUPLING_METHODS.join(', ')} (default haasnoot-1980)`)
     .option('--energy-field <name>', 'SD field or XYZ key holding the energy (default: the first whose name contains "energy")')
-    .option('--energy-unit <unit>', 'unit of the energies: kcal/mol, kJ/mol, hartree, eV (default: from the field name)')
+    .option('--energy-unit <unit>', 'unit of the energies: kcal/mol, kJ/mol, hartree, eV (default: from the value, the field name or the file\'s convention; never guessed)')
     .option('--tolerance <A>', 'bond perception tolerance added to the covalent radii, Å (default 0.40)')
     .option('-o, --output <file>', 'write to FILE instead of standard output')
     .action(async (file: string, flags: InspectFlags, command: Command) => {

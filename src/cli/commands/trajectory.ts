@@ -2,7 +2,7 @@
 import type { Command } from 'commander';
 import cliProgress from 'cli-progress';
 import { analyzeTrajectory, FIGURE_FORMATS, parseTimestep, protectInput, usageError, type FigureFormat } from '../../index.js';
-import { limitsOf, oneOf, printWarnings, wholeNumber } from '../options.js';
+import { limitsOf, oneOf, printWarnings, wholeNumber, DPI_HELP, dpiOption } from '../options.js';
 
 interface TrajectoryFlags {
   ring?: string;
@@ -14,6 +14,7 @@ interface TrajectoryFlags {
   torsion?: string[];
   formats?: string;
   theme?: string;
+  dpi?: string;
 }
 
 function formats(text: string | undefined): FigureFormat[] {
@@ -52,6 +53,7 @@ export function registerTrajectory(program: Command): void {
     .option('--timestep <value...>', 'time between frames with a unit, e.g. "2 ps" or 2ps (fs, ps, ns, us, ms, s)')
     .option('--torsion <A-B-C-D...>', 'torsions to add as CSV columns (numbers from 1 or atom names); repeatable')
     .option('--formats <list>', 'figure formats, comma-separated: svg, png, pdf (default svg)')
+    .option('--dpi <n>', DPI_HELP)
     .option('--theme <name|path>', 'column (print), projector (slides), contrast (colour-blind-safe), or a theme .json file (default column)')
     .action(async (file: string, flags: TrajectoryFlags, command: Command) => {
       protectInput(file);
@@ -68,6 +70,7 @@ export function registerTrajectory(program: Command): void {
           torsions: flags.torsion ?? [],
           formats: formats(flags.formats),
           theme: flags.theme,
+          dpi: dpiOption(flags.dpi),
           read,
           onProgress: (read) => bar.update(read),
         });

@@ -14,6 +14,23 @@ export interface DrawnAzimuths {
 const measured = (subs: readonly NewmanSubstituent[]) =>
   subs.filter((s) => s.azimuthDeg !== null).sort((a, b) => a.azimuthDeg! - b.azimuthDeg! || a.atom - b.atom);
 
+/**
+ * Smallest drawn offset of a back bond from a front bond in `true` mode, degrees: a back bond (nearly) eclipsed
+ * by a front bond would start on it and vanish behind it, so it is turned to this offset; torsion values stay
+ * measured (common practice, no source).
+ */
+export const TRUE_MIN_OFFSET_DEG = 5;
+
+function opened(back: Map<number, number>, front: readonly number[]): Map<number, number> {
+  for (const [atom, az] of back) {
+    for (const f of front) {
+      const d = wrap180(az - f);
+      if (Math.abs(d) < TRUE_MIN_OFFSET_DEG) back.set(atom, wrap360(f + (d < 0 ? -TRUE_MIN_OFFSET_DEG : TRUE_MIN_OFFSET_DEG)));
+    }
+  }
+  return back;
+}
+
 /** Evenly spaced azimuths starting at `start`, in the measured clockwise order. */
 function spaced(subs: readonly NewmanSubstituent[], first: number, start: number): Map<number, number> {
   const k0 = subs.findIndex((s) => s.atom === first);
@@ -32,7 +49,7 @@ export function drawnAzimuths(view: NewmanView, angles: NewmanAngles, eclipsedOf
   const back = measured(view.backSubstituents);
   const trueMap = (subs: NewmanSubstituent[]) => new Map(subs.map((s) => [s.atom, s.azimuthDeg!]));
   if (angles === 'true' || view.up === null || !front.some((s) => s.atom === view.up)) {
-    return { front: trueMap(front), back: trueMap(back) };
+    return { front: trueMap(front), back: opened(trueMap(back), front.map((s) => s.azimuthDeg!)) };
   }
   const upAz = view.frontSubstituents.find((s) => s.atom === view.up)!.azimuthDeg!;
   let nearest: NewmanSubstituent | undefined;

@@ -15,9 +15,14 @@ import { boxAt, textBox } from '../text/textBox.js';
 import { firstFreeOf, grow, type Box, type Obstacles } from '../text/labelPlacement.js';
 import { torsionArcPath, torsionArcPoints } from './torsionArc.js';
 import { approximateMeasure, DEFAULT_METRICS, shiftItem, textStyle, type Scene, type SceneItem, type SceneMetrics, type TextMeasure } from '../scene.js';
-import { couplingLines, newmanCaption, newmanDescription, torsionText } from './newmanText.js';
+import { couplingLines, newmanCaption, newmanDescription, torsionText, type AtomNames } from './newmanText.js';
+import type { Graph } from '../../perceive/graph.js';
+import { groupLabel, isTerminalDouble } from '../text/groupLabel.js';
+import { runsBox } from '../text/textBox.js';
+import { runsText, scriptSize } from '../text/textRuns.js';
+import { bondLabelCandidates, pickBondLabel, type Point } from '../text/bondLabel.js';
 
-/** How hydrogens are drawn: with labels, not at all, or as short unlabelled stubs (`collapse`). */
+/** How hydrogens are drawn: with labels, not at all, or as short bonds with small `H` labels (`collapse`). */
 export type NewmanHydrogens = 'show' | 'hide' | 'collapse';
 
 /** Options of {@link layoutNewman}. Lengths are multiples of the theme's `bondLength` (the circle radius). */
@@ -26,7 +31,7 @@ export interface NewmanLayoutOptions {
   readonly angles?: NewmanAngles;
   /** Front/back pairs (0-based atoms) to mark with a torsion arc and value. Default: the heaviest pair; `[]` marks none. */
   readonly mark?: readonly (readonly [number, number])[];
-  /** Default `show`. `collapse`: hydrogen bonds drawn as short stubs without labels. */
+  /** Default `show`. `collapse`: hydrogen bonds drawn short, each with a small `H` (a bare stub would read as methyl). */
   readonly hydrogens?: NewmanHydrogens;
   /** Label text. Default `element`. */
   readonly labels?: NewmanLabels;
@@ -40,6 +45,14 @@ export interface NewmanLayoutOptions {
   readonly eclipsedOffsetDeg?: number;
   /** Predicted ³J(H,H) per front/back proton pair (0-based atoms), printed under the caption. Default none. */
   readonly couplings?: readonly NewmanCouplingLabel[];
+  /** Bond graph: with it, `element` labels become group labels (`OMe`, `CH₂OH`/`HOH₂C`) and C=O is drawn double. Default none. */
+  readonly graph?: Graph;
+  /** Chemical names of atoms (`chemicalNumbering`): ring neighbours are labelled by them and captions use them. Default none. */
+  readonly names?: AtomNames;
+  /** Rings (cyclic 0-based lists), so ring neighbours are named by locant. Default none. */
+  readonly rings?: readonly (readonly number[])[];
+  /** Extra caption lines (e.g. the hydroxymethyl rotamer), printed after the marked torsions. Default none. */
+  readonly notes?: readonly string[];
 }
 
 /** One coupling to print: protons on the front and back atoms, J in Hz, and the equation's name. */
@@ -94,11 +107,23 @@ export function layoutNewman(view: NewmanView, mol: Molecule, options: NewmanLay
   const items: SceneItem[] = [];
   const obstacles: Obstacles = { boxes: [], segments: [], rings: [{ cx: 0, cy: 0, r: R }] };
   const ends = new Map<string, number>();
+  const graph = options.graph;
+  const pushBond = (role: string, x1: number, y1: number, x2: number, y2: number, atoms: [number, number]) => {
+    if (!graph || !isTerminalDouble(mol, graph, atoms[0], atoms[1])) {
+      items.push({ type: 'line', role, x1, y1, x2, y2, atoms });
+      return;
+    }
+    // C=O / S=O: two lines either side of the bond axis
+    const len = Math.hypot(x2 - x1, y2 - y1) || 1;
+    const off = Math.max(1, 1.4 * metrics.lineWidth);
+    const [nx, ny] = [(-(y2 - y1) / len) * off, ((x2 - x1) / len) * off];
+    for (const k of [1, -1]) items.push({ type: 'line', role, x1: x1 + k * nx, y1: y1 + k * ny, x2: x2 + k * nx, y2: y2 + k * ny, atoms });
+  };
   for (const y of backAtoms) {
     const end = (hydrogens === 'collapse' && isH(y) ? BACK_STUB : BACK_END) * R;
     const [x1, y1] = polar(R, drawn.back.get(y)!);
     const [x2, y2] = polar(end, drawn.back.get(y)!);
-    items.push({ type: 'line', role: 'back-bond', x1, y1, x2, y2, atoms: [view.back, y] });
+    pushBond('back-bond', x1, y1, x2, y2, [view.back, y]);
     ends.set(`b${y}`, end);
   }
   items.push({ type: 'circle', role: 'back-atom', cx: 0, cy: 0, r: R, atom: view.back });
@@ -115,7 +140,7 @@ export function layoutNewman(view: NewmanView, mol: Molecule, options: NewmanLay
   for (const x of frontAtoms) {
     const end = (hydrogens === 'collapse' && isH(x) ? FRONT_STUB : FRONT_END) * R;
     const [x2, y2] = polar(end, drawn.front.get(x)!);
-    items.push({ type: 'line', role: 'front-bond', x1: 0, y1: 0, x2, y2, atoms: [view.front, x] });
+    pushBond('front-bond', 0, 0, x2, y2, [view.front, x]);
     ends.set(`f${x}`, end);
   }
   for (const it of items) if (it.type === 'line') obstacles.segments.push(it);
@@ -137,12 +162,31 @@ export function layoutNewman(view: NewmanView, mol: Molecule, options: NewmanLay
     items.push({ type: 'text', role, x: (box.x0 + box.x1) / 2, y: (box.y0 + box.y1) / 2 + t.baseline, text, anchor: 'middle', fontSize: style.fontSize, fontWeight: style.fontWeight, ...extra });
   };
   const step = Math.max(metrics.gap, labelStyle.fontSize * 0.25);
-  const labelled = (i: number) => !(isH(i) && hydrogens !== 'show');
+  const hStyle = { fontSize: scriptSize(labelStyle.fontSize), fontWeight: labelStyle.fontWeight };
+  const context = { names: options.names, rings: options.rings };
+  const endPoint = (side: 'f' | 'b', i: number): Point => {
+    const [x, y] = polar(ends.get(`${side}${i}`)!, (side === 'f' ? drawn.front : drawn.back).get(i)!);
+    return { x, y };
+  };
+  const allEnds = [...frontAtoms.map((i) => ({ i, p: endPoint('f', i) })), ...backAtoms.map((i) => ({ i, p: endPoint('b', i) })), { i: view.front, p: { x: 0, y: 0 } }];
   for (const [side, list, map] of [['f', frontAtoms, drawn.front], ['b', backAtoms, drawn.back]] as const) {
-    for (const i of list.filter(labelled)) {
-      const text = atomLabelText(mol, i, labels);
-      const t = textBox(text, labelStyle, measure);
-      place('atom-label', text, rayCandidates(0, 0, map.get(i)!, ends.get(`${side}${i}`)! + metrics.gap + metrics.lineWidth / 2, t, step), { atom: i });
+    for (const i of list.filter((a) => hydrogens !== 'hide' || !isH(a))) {
+      const from = side === 'f' ? view.front : view.back;
+      const small = hydrogens === 'collapse' && isH(i);
+      const style = small ? hStyle : labelStyle;
+      const az = map.get(i)!;
+      const group = labels === 'element' && graph ? groupLabel(mol, graph, i, from, context) : null;
+      const reversed = Math.sin((az * Math.PI) / 180) < -0.25;
+      const runs = group ? (reversed ? group.reversed : group.forward) : [{ text: atomLabelText(mol, i, labels) }];
+      const t = runsBox(runs, style, measure);
+      const anchorWidth = Math.min(t.width, measure(group?.anchor ?? runsText(runs), style));
+      const own = endPoint(side, i);
+      const candidates = bondLabelCandidates(own, az, metrics.gap + metrics.lineWidth / 2, { box: t, anchorWidth, reversed: group !== null && reversed }, step, 30, 30);
+      const { box } = pickBondLabel(candidates, obstacles, clearance, own, allEnds.filter((e) => e.i !== i).map((e) => e.p), style.fontSize / 2);
+      obstacles.boxes.push(box);
+      textBoxes.push(box);
+      const typeset = runs.some((r) => 'shift' in r && r.shift) ? { runs } : {};
+      items.push({ type: 'text', role: small ? 'hydrogen-label' : 'atom-label', x: (box.x0 + box.x1) / 2, y: (box.y0 + box.y1) / 2 + t.baseline, text: runsText(runs), ...typeset, anchor: 'middle', fontSize: style.fontSize, fontWeight: style.fontWeight, atom: i });
     }
   }
   // 4. Torsion values beside their arcs, from the arc outward.
@@ -169,8 +213,8 @@ export function layoutNewman(view: NewmanView, mol: Molecule, options: NewmanLay
     x0 = Math.min(x0, b.x0); x1 = Math.max(x1, b.x1); y0 = Math.min(y0, b.y0); y1 = Math.max(y1, b.y1);
   }
   const captionLines = [
-    ...(caption ? newmanCaption(view, mol, marks, angles, labels) : []).map((text) => ({ text, role: 'caption' })),
-    ...couplingLines(view, mol, options.couplings ?? [], labels).map((text) => ({ text, role: 'coupling-label' })),
+    ...(caption ? [...newmanCaption(view, mol, marks, angles, labels, options.names), ...(options.notes ?? [])] : []).map((text) => ({ text, role: 'caption' })),
+    ...couplingLines(view, mol, options.couplings ?? [], labels, options.names).map((text) => ({ text, role: 'coupling-label' })),
   ];
   const capStyle = textStyle(metrics, 'caption');
   const capTop = y1 + Math.max(metrics.gap * 2, capStyle.fontSize * 0.7);
@@ -189,8 +233,8 @@ export function layoutNewman(view: NewmanView, mol: Molecule, options: NewmanLay
     kind: 'newman',
     width: x1 - x0 + 2 * metrics.margin,
     height: y1 - y0 + 2 * metrics.margin,
-    title: `Newman projection along ${mol.atoms[view.front]!.element}${view.front + 1}–${mol.atoms[view.back]!.element}${view.back + 1}`,
-    desc: newmanDescription(view, mol, marks, angles, labels),
+    title: `Newman projection along ${options.names?.get(view.front) ?? `${mol.atoms[view.front]!.element}${view.front + 1}`}–${options.names?.get(view.back) ?? `${mol.atoms[view.back]!.element}${view.back + 1}`}`,
+    desc: newmanDescription(view, mol, marks, angles, labels, options.names),
     items: shifted,
   };
 }

@@ -4,11 +4,15 @@ import { formatTick } from './plotTicks.js';
 import { textStyle, type SceneItem, type SceneMetrics, type TextMeasure } from '../scene.js';
 
 /** Items of the legend, laid out in one row from (x, top); `bottom` is the y below it. */
-export function densityLegend(maxCount: number, x: number, top: number, m: SceneMetrics, measure: TextMeasure): { items: SceneItem[]; bottom: number; right: number } {
+export function densityLegend(
+  maxCount: number, x: number, top: number, m: SceneMetrics, measure: TextMeasure,
+  options: { readonly head?: string; readonly cls?: string } = {},
+): { items: SceneItem[]; bottom: number; right: number } {
   const tick = textStyle(m, 'tick-label');
   const s = tick.fontSize * 1.1;
   const items: SceneItem[] = [];
-  const head = 'frames per cell (log scale):';
+  const head = options.head ?? 'frames per cell (log scale):';
+  const cls = options.cls ?? 'density';
   items.push({ type: 'text', role: 'tick-label', x, y: top + s * 0.85, text: head, anchor: 'start', ...tick });
   let cx = x + measure(head, tick) + tick.fontSize * 0.6;
   const thresholds = levelThresholds(maxCount);
@@ -16,7 +20,7 @@ export function densityLegend(maxCount: number, x: number, top: number, m: Scene
   const shown = [...new Set(thresholds)].map((t) => ({ t, level: densityLevel(t, maxCount) }));
   for (const { t, level } of shown) {
     const d = `M${r(cx)},${r(top)}h${r(s)}v${r(s)}h${r(-s)}Z`;
-    items.push({ type: 'path', role: `density-${level}`, d });
+    items.push({ type: 'path', role: `${cls}-${level}`, d });
     items.push({ type: 'path', role: 'swatch-frame', d });
     const text = `≥${formatTick(t)}`;
     items.push({ type: 'text', role: 'tick-label', x: cx + s + tick.fontSize * 0.3, y: top + s * 0.85, text, anchor: 'start', ...tick });

@@ -9,6 +9,7 @@ import type { ShapeTable } from '../../analysis/shapeTable.js';
 import { circlePath, discPoint, type Disc } from './discGeometry.js';
 import { densityLegend } from './densityLegend.js';
 import { densityItems, formLabel, type PuckerMapOptions } from './puckerMapLayout.js';
+import { haloed } from './labelHalo.js';
 import { approximateMeasure, DEFAULT_METRICS, textStyle, type Scene, type SceneItem } from '../scene.js';
 
 /**
@@ -38,7 +39,7 @@ export function layoutPseudorotationWheel(grid: PolarGrid, table: ShapeTable, ma
   items.push({ type: 'path', role: 'axis', d: circlePath(disc, 1) });
   for (let a = step; a <= maxAmplitudeDeg; a += step) {
     const [x, y] = discPoint(disc, a / maxAmplitudeDeg, 90);
-    items.push({ type: 'text', role: 'tick-label', x: x - tick.fontSize * 0.2, y: y - tick.fontSize * 0.3, text: `${a}°`, anchor: 'end', ...tick });
+    items.push(...haloed({ type: 'text', role: 'tick-label', x: x - tick.fontSize * 0.2, y: y - tick.fontSize * 0.3, text: `${a}°`, anchor: 'end', ...tick }));
   }
   const dotR = label.fontSize * 0.28;
   table.forms.forEach((f, i) => {

@@ -14,6 +14,7 @@ import { circlePath, discPoint, sectorPath, type Disc } from './discGeometry.js'
 import { densityLegend } from './densityLegend.js';
 import { textStyle, approximateMeasure, DEFAULT_METRICS, type Scene, type SceneItem, type SceneMetrics, type TextMeasure } from '../scene.js';
 import { typesetDescriptor } from '../text/typesetDescriptor.js';
+import { haloed } from './labelHalo.js';
 
 /** Options of the map layouts. */
 export interface PuckerMapOptions {
@@ -62,7 +63,7 @@ function hemisphere(grid: PolarGrid, disc: Disc, south: boolean, table: ShapeTab
     const [x, y] = discPoint(disc, rho, f.phiDeg);
     if (f.shape === 'chair') {
       items.push({ type: 'circle', role: 'form-chair', cx: x, cy: y, r: dotR * 1.3 });
-      items.push({ type: 'text', role: 'form-label', x: x + dotR * 2, y: y + dotR * 2 + label.fontSize * 0.8, text: formLabel(table, i), anchor: 'start', ...label });
+      items.push(...haloed({ type: 'text', role: 'form-label', x: x + dotR * 2, y: y + dotR * 2 + label.fontSize * 0.8, text: formLabel(table, i), anchor: 'start', ...label }));
     } else if (f.shape === 'boat' || f.shape === 'twist-boat') {
       items.push({ type: 'circle', role: f.shape === 'boat' ? 'form-boat' : 'form-twist', cx: x, cy: y, r: dotR });
       const [lx, ly] = discPoint(disc, 1 + (m.gap + label.fontSize * 0.9) / disc.R, f.phiDeg);

@@ -1,23 +1,31 @@
 /**
- * `time-series`: puckering coordinates against frame or time, down-sampled to min/max per bucket (a few
- * hundred columns whatever the number of frames), over background bands that show the majority ring shape of
- * each stretch. One panel per series, stacked, sharing the x axis; angles that wrap (φ, P) break the line
- * where they jump across 0/360.
+ * `time-series`: puckering coordinates against frame or time over background bands that show the majority
+ * ring shape of each stretch. One panel per series, stacked, sharing the x axis. A short run is drawn frame by
+ * frame (dots, lines only between consecutive frames); a long one as per-column densities on a log scale, so
+ * 10⁶ frames read as well as 10³ (see seriesMarks.ts). A panel may show a second, muted series in grey: the
+ * values of the first that are not meaningful (φ of a six-ring near the poles, where it is set by noise).
  */
-import { line } from 'd3-shape';
-import type { SeriesBucket } from '../../analysis/seriesBuckets.js';
+import type { SeriesBinning, SeriesBucket } from '../../analysis/seriesBuckets.js';
 import { formatTick, niceTicks, tickFormatter } from './plotTicks.js';
+import { densityLegend } from './densityLegend.js';
+import { columnCount, columnHistograms, densityMarks, drawsPoints, maxCell, pointMarks, type PanelFrame } from './seriesMarks.js';
 import { approximateMeasure, DEFAULT_METRICS, textStyle, type Scene, type SceneItem, type SceneMetrics, type TextMeasure } from '../scene.js';
 
-/** One plotted series (index into the bucket ranges). */
+/** One plotted panel. */
 export interface SeriesSpec {
   /** Axis label with unit, e.g. `θ (°)`. */
   readonly label: string;
   readonly min: number;
   readonly max: number;
   readonly ticks: readonly number[];
-  /** True for angles on a circle (φ, P): the line breaks where it jumps by more than half the range. */
+  /** True for angles on a circle (φ, P): lines never join values more than half the range apart. */
   readonly wraps: boolean;
+  /** Index of the series in the buckets. Default: the panel's position. */
+  readonly index?: number;
+  /** Bins of the series' histograms (needed for long runs; a panel without them shows its min/max envelope). */
+  readonly binning?: SeriesBinning;
+  /** A second series drawn in grey under the first, with the same binning, and the words saying what it is. */
+  readonly muted?: { readonly index: number; readonly note: string };
 }
 
 /** Options of `layoutTimeSeries`. */
@@ -30,31 +38,20 @@ export interface TimeSeriesOptions {
   readonly ringLabel?: string;
 }
 
-type Pt = [number, number] | null;
+const r2 = (v: number) => {
+  const x = Math.round(v * 100) / 100;
+  return x === 0 ? 0 : x;
+};
 
-function seriesPoints(buckets: readonly SeriesBucket[], s: number, spec: SeriesSpec, xs: (b: SeriesBucket) => number, ys: (v: number) => number): Pt[] {
-  const pts: Pt[] = [];
-  const half = (spec.max - spec.min) / 2;
-  let prev: [number, number] | null = null;
-  for (const b of buckets) {
+/** Min/max envelope of a series without bins: one vertical stroke per bucket (long runs only). */
+function envelope(buckets: readonly SeriesBucket[], s: number, f: PanelFrame, xs: (b: SeriesBucket) => number): SceneItem[] {
+  const d = buckets.flatMap((b) => {
     const r = b.ranges[s];
-    if (!r) {
-      if (pts.length && pts[pts.length - 1] !== null) pts.push(null);
-      prev = null;
-      continue;
-    }
-    if (spec.wraps && r[1] - r[0] > half) {
-      // the angle crossed 0/360 inside this column: its min and max say nothing, leave a gap
-      if (pts.length && pts[pts.length - 1] !== null) pts.push(null);
-      prev = null;
-      continue;
-    }
-    if (spec.wraps && prev && (r[0] - prev[1] > half || prev[0] - r[1] > half)) pts.push(null);
-    const x = xs(b);
-    pts.push([x, ys(r[0])], [x, ys(r[1])]);
-    prev = r;
-  }
-  return pts;
+    if (!r) return [];
+    const lo = Math.max(f.min, r[0]), hi = Math.min(f.max, r[1]);
+    return hi >= lo ? [`M${r2(xs(b))},${r2(f.yOf(hi) - 0.3)}V${r2(f.yOf(lo) + 0.3)}`] : [];
+  }).join('');
+  return d ? [{ type: 'path', role: 'series', d }] : [];
 }
 
 /**
@@ -87,6 +84,7 @@ export function layoutTimeSeries(
   const items: SceneItem[] = [];
   const panelTop = (i: number) => top0 + i * (PH + gapY);
   const bottom = panelTop(series.length - 1) + PH;
+  const points = drawsPoints(buckets);
   // 1. Shape bands across every panel: runs of buckets with the same majority shape.
   for (let i = 0; i < buckets.length; ) {
     let j = i;
@@ -101,19 +99,32 @@ export function layoutTimeSeries(
     });
     i = j + 1;
   }
-  // 2. Panels: grid, series line, frame and ticks.
+  // 2. Panels: grid, marks, frame and ticks.
   const xTicks = niceTicks(x0, x1, 6);
+  const nCols = columnCount(buckets.length, PW);
+  let densityMax = 0;
+  const notes: string[] = [];
   series.forEach((spec, p) => {
     const t = panelTop(p);
-    const sy = (v: number) => t + PH - ((v - spec.min) / (spec.max - spec.min)) * PH;
+    const sy = (v: number) => t + PH - ((Math.min(spec.max, Math.max(spec.min, v)) - spec.min) / (spec.max - spec.min)) * PH;
+    const frame: PanelFrame = { xOf: (f) => sx(xOf(f)), yOf: sy, min: spec.min, max: spec.max, left, width: PW, dotR: Math.max(0.45, Math.min(1.1, PW / Math.max(1, buckets.length) / 2.2)) };
     for (const v of spec.ticks) items.push({ type: 'line', role: 'grid', x1: left, y1: sy(v), x2: left + PW, y2: sy(v) });
-    const pts = seriesPoints(buckets, p, spec, (b) => sx(xOf((b.xFirst + b.xLast) / 2)), sy);
-    const d = line<Pt>()
-      .defined((q) => q !== null)
-      .x((q) => q![0])
-      .y((q) => q![1])
-      .digits(2)(pts);
-    if (d) items.push({ type: 'path', role: 'series', d });
+    const s = spec.index ?? p;
+    if (points) {
+      if (spec.muted) items.push(...pointMarks(buckets, spec.muted.index, frame, spec.wraps, 'series-muted', null));
+      items.push(...pointMarks(buckets, s, frame, spec.wraps, 'series-point', 'series'));
+    } else if (spec.binning) {
+      const bin = spec.binning;
+      const cols = columnHistograms(buckets, s, nCols, first, last);
+      const muted = spec.muted ? columnHistograms(buckets, spec.muted.index, nCols, first, last) : null;
+      const max = maxCell(cols);
+      densityMax = Math.max(densityMax, max);
+      if (muted) items.push(...densityMarks(muted, bin, frame, 1, 'series-muted', true));
+      items.push(...densityMarks(cols, bin, frame, Math.max(1, max), 'trace'));
+    } else {
+      items.push(...envelope(buckets, s, frame, (b) => sx(xOf((b.xFirst + b.xLast) / 2))));
+    }
+    if (spec.muted) notes.push(spec.muted.note);
     items.push({ type: 'path', role: 'axis', d: `M${r2(left)},${r2(t)}V${r2(t + PH)}H${r2(left + PW)}` });
     for (const v of spec.ticks) {
       items.push({ type: 'line', role: 'axis', x1: left - m.gap, y1: sy(v), x2: left, y2: sy(v) });
@@ -130,11 +141,15 @@ export function layoutTimeSeries(
   const xLabel = dt ? `time (${dt.unit})` : 'frame';
   let y = bottom + m.gap + tick.fontSize * 2.3;
   items.push({ type: 'text', role: 'panel-title', x: left + PW / 2, y, text: xLabel, anchor: 'middle', ...title });
-  // 3. Legend of the shapes that appear as bands.
+  // 3. Legends: the shapes that appear as bands, the density scale, the muted values.
+  const s = tick.fontSize;
+  const swatch = (x: number, yTop: number, role: string) => {
+    const d = `M${r2(x)},${r2(yTop)}h${r2(s)}v${r2(s)}h${r2(-s)}Z`;
+    items.push({ type: 'path', role, d }, { type: 'path', role: 'swatch-frame', d });
+  };
   const used = [...new Set(buckets.map((b) => b.majority))].sort((a, b) => a - b).map((c) => categories[c] ?? 'puckered');
   y += tick.fontSize * 1.2;
   let x = left;
-  const s = tick.fontSize;
   items.push({ type: 'text', role: 'tick-label', x, y: y + s * 0.85, text: 'majority shape:', anchor: 'start', ...tick });
   x += measure('majority shape:', tick) + s * 0.6;
   for (const shape of used) {
@@ -143,23 +158,33 @@ export function layoutTimeSeries(
       x = left;
       y += s * 1.5;
     }
-    const d = `M${r2(x)},${r2(y)}h${r2(s)}v${r2(s)}h${r2(-s)}Z`;
-    items.push({ type: 'path', role: `band-${shape}`, d }, { type: 'path', role: 'swatch-frame', d });
+    swatch(x, y, `band-${shape}`);
     items.push({ type: 'text', role: 'tick-label', x: x + s * 1.3, y: y + s * 0.85, text: shape, anchor: 'start', ...tick });
     x += w;
   }
+  let right = left + PW;
+  if (!points && densityMax > 0) {
+    y += s * 1.5;
+    const legend = densityLegend(densityMax, left, y, m, measure, { head: `frames per column and bin (${nCols} columns, log scale):`, cls: 'trace' });
+    items.push(...legend.items);
+    right = Math.max(right, legend.right);
+  }
+  for (const note of [...new Set(notes)]) {
+    y += s * 1.5;
+    swatch(left, y, 'series-muted');
+    items.push({ type: 'text', role: 'tick-label', x: left + s * 1.3, y: y + s * 0.85, text: note, anchor: 'start', ...tick });
+    right = Math.max(right, left + s * 1.3 + measure(note, tick));
+  }
   const samples = buckets.reduce((n, b) => n + b.samples, 0);
+  const how = points
+    ? `shown frame by frame (lines join consecutive frames only)`
+    : `shown as the density of ${nCols} columns on a log scale`;
   return {
     kind: 'time-series',
-    width: left + PW + m.margin + tick.fontSize,
+    width: right + m.margin + tick.fontSize,
     height: y + s + m.margin,
     title: `Puckering of ${options.ringLabel ?? 'ring'} against ${dt ? 'time' : 'frame'} (${samples} frames)`,
-    desc: `${series.map((s) => s.label).join(' and ')} against ${xLabel}, shown as the minimum–maximum envelope of ${buckets.length} columns; background bands give the majority ring shape of each stretch.`,
+    desc: `${series.map((sp) => sp.label).join(' and ')} against ${xLabel}, ${how}; background bands give the majority ring shape of each stretch.`,
     items,
   };
 }
-
-const r2 = (v: number) => {
-  const x = Math.round(v * 100) / 100;
-  return x === 0 ? 0 : x;
-};

@@ -1,7 +1,7 @@
 /**
  * Words of a ring figure: the caption (shape and typeset IUPAC descriptor; Q, θ, φ) and the SVG title and
- * description. Descriptor locants that are digits become Unicode super/subscript digits (DejaVu Sans has them);
- * any other locant (the ring O, lists with commas) becomes a smaller raised or lowered run.
+ * description. Descriptor locants are smaller raised or lowered runs (typeset as tspans), digits and heteroatom
+ * locants alike (⁴C₁, B₂,₅, E_O).
  */
 import type { RingAnalysis } from '../../analysis/ringAnalysis.js';
 import type { DescriptorParts } from '../../analysis/ringDescriptor.js';
@@ -13,11 +13,9 @@ export interface CaptionRun {
   readonly level: 'base' | 'sup' | 'sub';
 }
 
-const SUP = '⁰¹²³⁴⁵⁶⁷⁸⁹';
-const SUB = '₀₁₂₃₄₅₆₇₈₉';
 const MINUS = '\u2212';
 
-/** Runs of a typeset descriptor, e.g. ⁴C₁ as one base run, ^{3,O}B as a raised run and a base run. */
+/** Runs of a typeset descriptor: ⁴C₁ as a raised `4`, `C` and a lowered `1`; ^{3,O}B as a raised run and a base run. */
 export function descriptorRuns(parts: DescriptorParts): CaptionRun[] {
   const runs: CaptionRun[] = [];
   const push = (text: string, level: CaptionRun['level']) => {
@@ -27,9 +25,7 @@ export function descriptorRuns(parts: DescriptorParts): CaptionRun[] {
     else runs.push({ text, level });
   };
   const script = (locants: readonly string[], level: 'sup' | 'sub') => {
-    const text = locants.join(',');
-    if (/^\d+$/.test(text)) push([...text].map((d) => (level === 'sup' ? SUP : SUB)[Number(d)]).join(''), 'base');
-    else push(text, level);
+    push(locants.join(','), level);
   };
   script(parts.above, 'sup');
   push(parts.letter, 'base');
@@ -66,11 +62,11 @@ export function ringTitle(ring: RingAnalysis, view: RingView): string {
 }
 
 /** The `<desc>` of a ring figure: view, numbers, and every substituent's position and face. */
-export function ringDescription(ring: RingAnalysis, view: RingView, elevationDeg: number, element: (atom: number) => string): string {
+export function ringDescription(ring: RingAnalysis, view: RingView, elevationDeg: number | null, element: (atom: number) => string, viewNote = ''): string {
   const how =
     view === 'template'
-      ? `Trade chair template placed from the measured Cremer–Pople displacements and substituent positions, viewed at ${elevationDeg}° elevation.`
-      : `Orthographic view of the measured coordinates in the ring frame (normal toward the viewer side, ${elevationDeg}° elevation).`;
+      ? `Stylised chair outline placed from the measured Cremer–Pople displacements and substituent positions.`
+      : `Orthographic view of the measured coordinates in the ring frame (normal toward the viewer side, ${elevationDeg ?? 0}° elevation${viewNote}).`;
   const pk = ring.puckering;
   const numbers = `Q ${numberText(pk.Q, 3)} Å, θ ${numberText(pk.thetaDeg, 1)}, φ ${numberText(pk.phiDeg, 1)}.`;
   const subs = ring.substituents

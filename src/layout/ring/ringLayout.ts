@@ -10,9 +10,13 @@ import type { Graph } from '../../perceive/graph.js';
 import type { RingAnalysis } from '../../analysis/ringAnalysis.js';
 import { firstFree, grow, type Box, type Obstacles, type Segment } from '../text/labelPlacement.js';
 import { boxAt, textBox, type TextBox } from '../text/textBox.js';
-import { approximateMeasure, DEFAULT_METRICS, shiftItem, textStyle, type Scene, type SceneItem, type SceneLine, type SceneMetrics, type TextMeasure, type TextStyle } from '../scene.js';
+import { approximateMeasure, DEFAULT_METRICS, shiftItem, textStyle, type Scene, type SceneItem, type SceneLine, type SceneMetrics, type TextMeasure, type TextRun, type TextStyle } from '../scene.js';
 import { ringCaption, ringDescription, ringTitle, type CaptionRun } from './ringCaption.js';
 import { ringAtomLabel, ringVertexLabel, substituentLabel, type RingLabels } from './ringLabels.js';
+import { isTerminalDouble, type GroupContext } from '../text/groupLabel.js';
+import { runsBox } from '../text/textBox.js';
+import { runsText } from '../text/textRuns.js';
+import { bondLabelCandidates, pickBondLabel, type Point } from '../text/bondLabel.js';
 import type { RingPlacement } from './ringPlacement.js';
 
 /** Options of {@link layoutRing}. */
@@ -25,6 +29,10 @@ export interface RingLayoutOptions {
   readonly metrics?: SceneMetrics;
   /** Text width function (the renderer's font measure). Default: 0.6 em per character. */
   readonly measure?: TextMeasure;
+  /** Chemical names of atoms (`chemicalNumbering`) for ring locants and fused-ring labels. Default none: reference locants. */
+  readonly names?: ReadonlyMap<number, string>;
+  /** Rings of the molecule (cyclic 0-based lists), so fused and spiro neighbours are named, not spelt out. Default none. */
+  readonly rings?: readonly (readonly number[])[];
 }
 
 interface Drawn {
@@ -54,10 +62,11 @@ export function layoutRing(placement: RingPlacement, ring: RingAnalysis, mol: Mo
   const obstacles: Obstacles = { boxes: [], segments: [], rings: [] };
   const texts: SceneItem[] = [];
   const textBoxes: Box[] = [];
-  const addText = (role: string, text: string, box: Box, t: TextBox, style: TextStyle, atom: number) => {
+  const addText = (role: string, text: string, box: Box, t: TextBox, style: TextStyle, atom: number, runs?: readonly TextRun[]) => {
     obstacles.boxes.push(box);
     textBoxes.push(box);
-    texts.push({ type: 'text', role, x: (box.x0 + box.x1) / 2, y: (box.y0 + box.y1) / 2 + t.baseline, text, anchor: 'middle', fontSize: style.fontSize, fontWeight: style.fontWeight, atom });
+    const typeset = runs?.some((r) => r.shift) ? { runs } : {};
+    texts.push({ type: 'text', role, x: (box.x0 + box.x1) / 2, y: (box.y0 + box.y1) / 2 + t.baseline, text, ...typeset, anchor: 'middle', fontSize: style.fontSize, fontWeight: style.fontWeight, atom });
   };
 
   // 1. Ring heteroatom symbols at their vertices; bonds stop short of them.
@@ -80,10 +89,12 @@ export function layoutRing(placement: RingPlacement, ring: RingAnalysis, mol: Mo
     const c1 = Math.min(cut.get(b.atoms[1]) ?? 0, len / 3);
     const line: SceneLine = { type: 'line', role: b.role, x1: p.x + ux * c0, y1: p.y + uy * c0, x2: q.x - ux * c1, y2: q.y - uy * c1, atoms: [b.atoms[0], b.atoms[1]] };
     return { line, near: (p.near + q.near) / 2, order };
-  });
+  }).flatMap((d) => (d.line.role !== 'ring-bond' && isTerminalDouble(mol, graph, d.line.atoms![0]!, d.line.atoms![1]!) ? doubled(d, metrics.lineWidth) : [d]));
   drawn.sort((a, b) => a.near - b.near || a.order - b.order);
   const items: SceneItem[] = [];
-  const halfGap = 1.6 * metrics.lineWidth + metrics.gap;
+  // half-length of a halo along the nearer bond: enough to cover the crossing (metrics.lineWidth counts the
+  // halo's own width, so it is not used here)
+  const halfGap = 1.5 * metrics.gap;
   drawn.forEach((d, i) => {
     for (const far of drawn.slice(0, i)) {
       if (far.line.atoms!.some((a) => d.line.atoms!.includes(a))) continue;
@@ -99,17 +110,32 @@ export function layoutRing(placement: RingPlacement, ring: RingAnalysis, mol: Mo
     obstacles.segments.push(d.line);
   });
 
-  // 3. Substituent labels beyond their bond ends.
+  // 3. Substituent labels beyond their bond ends: the bonded atom's symbol on the bond's line, the text reading
+  //    away from the ring (`CH₂OH` on the right, `HOH₂C` on the left), each nearer its own bond end than any other.
   const step = Math.max(metrics.gap, labelStyle.fontSize * 0.25);
+  const context: GroupContext = { names: options.names, rings: options.rings };
+  const bondEnds = new Map<number, Point>();
+  for (const d of drawn) {
+    bondEnds.set(d.line.atoms![1]!, { x: d.line.x2, y: d.line.y2 });
+    if (!bondEnds.has(d.line.atoms![0]!)) bondEnds.set(d.line.atoms![0]!, { x: d.line.x1, y: d.line.y1 });
+  }
+  for (const a of placement.ring) bondEnds.set(a, at(a));
+  const maxGap = labelStyle.fontSize / 2;
   for (const b of placement.bonds) {
     if (b.role === 'ring-bond') continue;
     const [from, atom] = b.atoms;
-    const text = substituentLabel(mol, graph, atom, from, labels);
-    const t = textBox(text, labelStyle, measure);
     const [p, q] = [at(from), at(atom)];
-    const len = Math.hypot(q.x - p.x, q.y - p.y);
-    const candidates = aroundCandidates(p.x, p.y, AZ(q.x - p.x, q.y - p.y), len + metrics.gap + metrics.lineWidth / 2, t, step, 45);
-    addText('atom-label', text, candidates[firstFree(candidates, obstacles, clearance)]!, t, labelStyle, atom);
+    const [dx, dy] = [q.x - p.x, q.y - p.y];
+    const len = Math.hypot(dx, dy) || 1;
+    const group = substituentLabel(mol, graph, atom, from, labels, context);
+    const reversed = dx / len < -0.25;
+    const runs = reversed ? group.reversed : group.forward;
+    const t = runsBox(runs, labelStyle, measure);
+    const anchorWidth = Math.min(t.width, measure(group.anchor, labelStyle));
+    const candidates = bondLabelCandidates(q, AZ(dx, dy), metrics.gap + metrics.lineWidth / 2, { box: t, anchorWidth, reversed }, step);
+    const others = [...bondEnds].filter(([a]) => a !== atom).map(([, pt]) => pt);
+    const { box } = pickBondLabel(candidates, obstacles, clearance, q, others, maxGap);
+    addText('atom-label', runsText(runs), box, t, labelStyle, atom, runs);
   }
 
   // 4. Ring locants beside their vertices, outward first.
@@ -117,7 +143,7 @@ export function layoutRing(placement: RingPlacement, ring: RingAnalysis, mol: Mo
   const cx = ringPts.reduce((s, p) => s + p.x, 0) / ringPts.length;
   const cy = ringPts.reduce((s, p) => s + p.y, 0) / ringPts.length;
   placement.ring.forEach((a, j) => {
-    const text = ringAtomLabel(mol, ring, j, labels);
+    const text = ringAtomLabel(mol, ring, j, labels, options.names);
     if (!text) return;
     const t = textBox(text, locantStyle, measure);
     const p = at(a);
@@ -194,17 +220,21 @@ function aroundCandidates(x: number, y: number, azDeg: number, from: number, t: 
   return scored.sort((p, q) => p.cost - q.cost).map((s) => s.box);
 }
 
-/** One caption line of runs centred on midX with its baseline at y; sup/sub runs smaller and shifted. */
+/** One caption line of runs centred on midX with its baseline at y: one text item, scripts as typeset runs. */
 function captionLine(runs: readonly CaptionRun[], style: TextStyle, measure: TextMeasure, midX: number, y: number): { items: SceneItem[]; x0: number; x1: number } {
-  const small: TextStyle = { fontSize: style.fontSize * 0.7, fontWeight: style.fontWeight };
-  const sized = runs.map((r) => ({ ...r, style: r.level === 'base' ? style : small, width: measure(r.text, r.level === 'base' ? style : small) }));
-  const total = sized.reduce((s, r) => s + r.width, 0);
-  let x = midX - total / 2;
-  const items: SceneItem[] = sized.map((r) => {
-    const dy = r.level === 'sup' ? -style.fontSize * 0.38 : r.level === 'sub' ? style.fontSize * 0.2 : 0;
-    const item: SceneItem = { type: 'text', role: r.level === 'base' ? 'caption' : `caption-${r.level}`, x, y: y + dy, text: r.text, anchor: 'start', fontSize: r.style.fontSize, fontWeight: r.style.fontWeight };
-    x += r.width;
-    return item;
-  });
-  return { items, x0: midX - total / 2, x1: midX + total / 2 };
+  const typeset: TextRun[] = runs.map((r) => (r.level === 'base' ? { text: r.text } : { text: r.text, shift: r.level }));
+  const total = runsBox(typeset, style, measure).width;
+  const text = runsText(typeset);
+  const item: SceneItem = { type: 'text', role: 'caption', x: midX, y, text, ...(typeset.some((r) => r.shift) ? { runs: typeset } : {}), anchor: 'middle', fontSize: style.fontSize, fontWeight: style.fontWeight };
+  return { items: [item], x0: midX - total / 2, x1: midX + total / 2 };
+}
+
+/** A substituent bond drawn double (C=O, S=O): two lines either side of the bond axis. */
+function doubled(d: Drawn, lineWidth: number): Drawn[] {
+  const { line } = d;
+  const len = Math.hypot(line.x2 - line.x1, line.y2 - line.y1) || 1;
+  const off = Math.max(1, 1.4 * lineWidth);
+  const [nx, ny] = [(-(line.y2 - line.y1) / len) * off, ((line.x2 - line.x1) / len) * off];
+  const side = (k: number): Drawn => ({ ...d, line: { ...line, x1: line.x1 + k * nx, y1: line.y1 + k * ny, x2: line.x2 + k * nx, y2: line.y2 + k * ny } });
+  return [side(1), side(-1)];
 }

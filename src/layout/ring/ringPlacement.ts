@@ -4,12 +4,14 @@
  * turns it into a Scene.
  */
 import type { ViewPoint } from './ringView.js';
+import type { ChairOutlineKind } from './chairOutline.js';
+import type { RingHydrogenMode } from './ringHydrogens.js';
 
 /** The two ring views: the trade's chair template, or the true orthographic projection. */
 export type RingView = 'template' | 'projected';
 
-/** Whether hydrogens on ring atoms are drawn. */
-export type RingHydrogens = 'show' | 'hide';
+/** Which hydrogens on ring atoms are drawn (see `drawnSubstituents`). */
+export type RingHydrogens = RingHydrogenMode;
 
 /** One drawn bond: `atoms` = [start atom, end atom] (ring atom first for substituents), 0-based. */
 export interface PlacedBond {
@@ -29,8 +31,12 @@ export interface RingPlacement {
   readonly bonds: readonly PlacedBond[];
   /** Length in Å that is drawn as one theme `bondLength` (the mean ring bond). */
   readonly unitLength: number;
-  /** Elevation of the view, degrees. */
-  readonly elevationDeg: number;
+  /** Elevation of the view, degrees; null for the template (a stylised outline, not a view). */
+  readonly elevationDeg: number | null;
+  /** Azimuth of the view about the ring normal, degrees from reference atom 1 (projected view). */
+  readonly azimuthDeg?: number;
+  /** Template outline of the family (`right-peak` or its mirror outline `right-valley`). */
+  readonly outline?: ChairOutlineKind;
 }
 
 /** Default elevation of both views, degrees (METHODS.md §10.2: 15–25° looks conventional). */
@@ -39,7 +45,7 @@ export const DEFAULT_ELEVATION_DEG = 20;
 /** The JSON form of a placement: 1-based atoms, screen coordinates in Å rounded to 1e-4. */
 export interface PlacementJson {
   readonly view: RingView;
-  readonly elevationDeg: number;
+  readonly elevationDeg: number | null;
   readonly atoms: { atom: number; x: number; y: number; near: number }[];
   readonly bonds: { atoms: [number, number]; role: string }[];
 }

@@ -9,12 +9,13 @@ import { add, distance, scale, sub } from '../../geometry/vec3.js';
 import type { RingAnalysis } from '../../analysis/ringAnalysis.js';
 import { checkElevation, projectPoint, ringViewFrame, type ViewPoint } from './ringView.js';
 import { DEFAULT_ELEVATION_DEG, type PlacedBond, type RingHydrogens, type RingPlacement } from './ringPlacement.js';
+import { drawnSubstituents } from './ringHydrogens.js';
 
 /** Options of {@link ringProjection}. */
 export interface RingProjectionOptions {
   /** Viewer elevation above the mean plane, degrees (0 = edge-on, 90 = straight down +n). Default 20. */
   readonly elevationDeg?: number;
-  /** Draw hydrogens on ring atoms. Default `show`. */
+  /** Ring hydrogens drawn: `all`, `stereo` or `none`. Default `stereo`. */
   readonly hydrogens?: RingHydrogens;
 }
 
@@ -23,7 +24,7 @@ export interface RingProjectionOptions {
  * @example ringProjection(analyzeRing(mol, graph, ring), mol, { elevationDeg: 30 })
  */
 export function ringProjection(ring: RingAnalysis, mol: Pick<Molecule, 'atoms' | 'coords'>, options: RingProjectionOptions = {}): RingPlacement {
-  const { elevationDeg = DEFAULT_ELEVATION_DEG, hydrogens = 'show' } = options;
+  const { elevationDeg = DEFAULT_ELEVATION_DEG, hydrogens = 'stereo' } = options;
   checkElevation(elevationDeg);
   const pos = (a: number) => atomPosition(mol, a);
   const [a1, a2] = [ring.atoms[0]!, ring.atoms[1]!];
@@ -34,8 +35,7 @@ export function ringProjection(ring: RingAnalysis, mol: Pick<Molecule, 'atoms' |
   for (const a of ring.atoms) points.set(a, projectPoint(frame, pos(a)));
   const n = ring.atoms.length;
   const bonds: PlacedBond[] = ring.atoms.map((a, j) => ({ atoms: [a, ring.atoms[(j + 1) % n]!], role: 'ring-bond' }));
-  for (const x of ring.substituents) {
-    if (hydrogens === 'hide' && mol.atoms[x.atom]!.element === 'H') continue;
+  for (const x of drawnSubstituents(ring.substituents, mol, hydrogens)) {
     if (!points.has(x.atom)) points.set(x.atom, projectPoint(frame, pos(x.atom)));
     bonds.push({ atoms: [x.ringAtom, x.atom], role: x.position ?? 'substituent-bond' });
   }
