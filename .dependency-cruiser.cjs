@@ -1,4 +1,4 @@
-/** Layering (STYLE.md): each layer imports only the layers above it in this list; no cycles. */
+/** Layering (DEVELOPERS.md, "Layers"): each layer imports only the layers above it in this list; no cycles. */
 const layers = ['model', 'geometry', 'io', 'perceive', 'analysis', 'layout', 'render', 'api'];
 const allowed = {
   model: [],

@@ -25,7 +25,7 @@ function generate() {
       const c = gen.getNextConformerAsMolecule();
       if (!c) break;
       c.setName(`${s} conformer ${k + 1}`);
-      // conformers have real bond lengths, so toMolfile() does not rescale them (LIBRARIES.md)
+      // conformers have real bond lengths, so toMolfile() does not rescale them (seen with openchemlib 9.25)
       blocks.push(c.toMolfile());
     }
   }

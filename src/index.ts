@@ -150,6 +150,10 @@ export type { RingSystem } from './perceive/ringSystems.js';
 export { atomIndex } from './perceive/atomIndex.js';
 export { bondSelection, bondListSelection } from './perceive/bondSelection.js';
 export { ringSelection } from './perceive/ringSelection.js';
+export { selectAtom, selectRings, ringTokenKind, splitAtomList } from './perceive/atomSelection.js';
+export type { RingTokenKind } from './perceive/atomSelection.js';
+export { residuesOf, residueLabel, atomResidueLabel, residueKey } from './perceive/residues.js';
+export type { Residue } from './perceive/residues.js';
 export { isTrigonalAtom, isTrigonalRing, trigonalAtoms } from './perceive/trigonalAtoms.js';
 // shared record preparation (integrator)
 export { prepareRecord, readRecord } from './api/prepare.js';

@@ -1,5 +1,5 @@
 /**
- * Boltzmann populations of a conformer ensemble (METHODS.md §9):
+ * Boltzmann populations of a conformer ensemble (docs/methods.md#boltzmann):
  *   p_i = g_i exp(−ΔE_i / RT) / Σ_k g_k exp(−ΔE_k / RT),  ΔE_i = E_i − E_min,
  * computed as a log-sum-exp so that nothing underflows. Pass free energies when you have them; populations
  * from electronic energies or enthalpies ignore entropy differences (the caller says so in its output).
@@ -73,7 +73,7 @@ export function boltzmannPopulations(energies: readonly number[], options: Boltz
 
 /**
  * Population-weighted average Σ p_i v_i of a per-conformer value, e.g. ⟨J⟩ from each conformer's J.
- * Average observables such as J, never the torsions they come from (METHODS.md §9).
+ * Average observables such as J, never the torsions they come from (docs/methods.md#boltzmann).
  * @example ensembleAverage([0.25, 0.75], [12, 4]) // 6
  */
 export function ensembleAverage(populations: readonly number[], values: readonly number[]): number {

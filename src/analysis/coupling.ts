@@ -1,5 +1,5 @@
 /**
- * Vicinal ³J(H,H) couplings for H–C(sp3)–C(sp3)–H fragments of a molecule (METHODS.md §6). Any other
+ * Vicinal ³J(H,H) couplings for H–C(sp3)–C(sp3)–H fragments of a molecule (docs/methods.md#karplus). Any other
  * fragment (sp2 carbons, heteroatoms, atoms that are not bonded as stated) is skipped with a reason, never
  * given a number. "sp3" means a carbon with four neighbours in the bond graph.
  */
@@ -40,7 +40,7 @@ export interface CouplingOptions {
    * (0–1 → B, 2 → C, 3 → D, 4 → E; see `haasnootSetFor`). Ignored by the Karplus forms.
    */
   readonly haasnootSet?: HaasnootSet | 'auto';
-  /** χ(F) on Huggins' scale. Default 4.00 (parameter listing); 3.90 is the value from memory. */
+  /** χ(F) on Huggins' scale. Default 4.00, alternative 3.90 (both from memory). */
   readonly fluorineElectronegativity?: number;
 }
 
@@ -187,7 +187,7 @@ export function ringCouplings(
   return ringAtoms.flatMap((a, i) => couplingsAcrossBond(mol, graph, a, ringAtoms[(i + 1) % ringAtoms.length]!, options));
 }
 
-/** The DESIGN.md JSON form of a coupling (`newman --json`, `inspect --couplings`), atoms 1-based. */
+/** The README.md JSON form of a coupling (`newman --json`, `inspect --couplings`), atoms 1-based. */
 export interface CouplingJson {
   readonly front: number;
   readonly back: number;

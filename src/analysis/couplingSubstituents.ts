@@ -1,6 +1,6 @@
 /**
  * The substituent terms of the Haasnoot–de Leeuw–Altona equation for one H–C–C–H fragment, read from the
- * molecular graph and coordinates (METHODS.md §6.2): every non-H neighbour of either coupled carbon other than
+ * molecular graph and coordinates (docs/methods.md#haasnoot): every non-H neighbour of either coupled carbon other than
  * the partner carbon, with its Huggins Δχ, the β correction and the orientation sign ξ from the vectors.
  */
 import { atomPosition, type Molecule } from '../model/molecule.js';

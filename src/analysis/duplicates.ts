@@ -1,6 +1,6 @@
 /**
  * Duplicate conformers in an ensemble: each record is compared with the earlier unique records by heavy-atom
- * RMSD after superposition; the first one within the threshold is the one it duplicates (DESIGN.md ensemble
+ * RMSD after superposition; the first one within the threshold is the one it duplicates (README.md ensemble
  * `duplicateOf`). Records in input order; pass them sorted by energy to keep the lowest of each set.
  */
 import type { Molecule } from '../model/molecule.js';

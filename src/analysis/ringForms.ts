@@ -1,20 +1,21 @@
 /**
  * The canonical ring forms on the Cremer–Pople sphere (six-rings) and circle (five-rings), with the reference
- * planes that name them (METHODS.md §3.1–3.3, §4.1, derived).
+ * planes that name them (docs/methods.md#six-ring-forms, docs/methods.md#five-ring-forms, derived).
  *
  * Six-rings: 2 C + 6 B + 6 S + 12 H + 12 E (the 38 IUPAC forms) plus the 12 screw-boats. Each form's ideal
  * displacements come from the inverse Cremer–Pople formula on a regular-hexagon projection; its reference planes
  * are found by testing every 5- and 4-atom subset for coplanarity, and each plane is typed by the exoplanar
- * atoms (§3.1): 5 in plane → E; two 1,4-related atoms on opposite sides → C, same side → B; 1,3-related →
+ * atoms (docs/methods.md#six-ring-forms): 5 in plane → E; two 1,4-related atoms on opposite sides → C, same side → B; 1,3-related →
  * S; adjacent pair on opposite sides → H, same side → screw-boat.
  * Five-rings: envelopes at φ2 = 36k (flap j = k mod 5 + 1, above for even k) and twists at 18 + 36k taking the
- * flaps of the two neighbouring envelopes (§4.1).
+ * flaps of the two neighbouring envelopes (docs/methods.md#five-ring-forms).
  */
 import { displacementsFromModes, ringFromDisplacements, sixRingModes } from '../geometry/cremerPople.js';
 import { cross, dot, sub, unit, DEG } from '../geometry/vec3.js';
 import type { Vec3 } from '../model/molecule.js';
+import type { MediumRingShape } from './mediumRingForms.js';
 
-/** Ring shape words (DESIGN.md). */
+/** Ring shape words (README.md "JSON documents", `shape`). */
 export type RingShape =
   | 'chair'
   | 'boat'
@@ -24,7 +25,8 @@ export type RingShape =
   | 'screw-boat'
   | 'twist'
   | 'planar'
-  | 'puckered';
+  | 'puckered'
+  | Exclude<MediumRingShape, 'chair' | 'boat' | 'twist-boat'>;
 
 /** IUPAC ring-form letters (JCBN 1980); screw-boats have none. */
 export type FormLetter = 'C' | 'B' | 'S' | 'H' | 'E' | 'T';
@@ -50,7 +52,7 @@ export interface CanonicalForm {
   readonly z: readonly number[];
 }
 
-/** Ideal polar angles (deg) of half-chairs, envelopes and screw-boats (METHODS.md §3.3, derived). */
+/** Ideal polar angles (deg) of half-chairs, envelopes and screw-boats (docs/methods.md#six-ring-forms, derived). */
 export const THETA_HALF_CHAIR = Math.atan(Math.sqrt(6) / 2) * DEG;
 export const THETA_ENVELOPE = Math.atan(Math.SQRT2) * DEG;
 export const THETA_SCREW_BOAT = Math.atan(Math.sqrt(6)) * DEG;

@@ -1,6 +1,6 @@
 /**
  * The reference numbering of a ring (j = 1…N): which atom is first and which way the walk goes. Cremer–Pople
- * (θ, φ), the ring-form descriptor and the torsion list all depend on it (METHODS.md §2.2–2.3).
+ * (θ, φ), the ring-form descriptor and the torsion list all depend on it (docs/methods.md#ring-orientation).
  *
  * Rules, tried in this order:
  * 1. `ordered`: a user-given ordered ring (`1-2-3-4-5-6`) is used exactly as given.
@@ -8,7 +8,7 @@
  *    the "anomeric-like" neighbour, the ring neighbour that itself carries an exocyclic heteroatom
  *    (O, N, S or a halogen), e.g. O5 → C1 → C2 …; when neither or both neighbours do, toward the lower-index
  *    neighbour. Locants: the heteroatom's symbol, then 1…N−1 (O, 1, 2, 3, 4, 5 for a pyranose).
- *    [common practice, no source; gives the standard sugar orders of METHODS.md §2.2]
+ *    [common practice, no source; gives the standard sugar orders of docs/methods.md#ring-orientation]
  * 3. Otherwise (carbocycles, or several ring heteroatoms): j = 1 is the lowest-index ring atom and the walk goes
  *    toward its lower-index ring neighbour. Locants 1…N. [common practice, no source]
  * For rule 1 the locants follow rule 2's style when j = 1 is the ring's only heteroatom, else 1…N.

@@ -1,4 +1,4 @@
-/** The DESIGN.md `rings[]` JSON entry of a ring analysis: 1-based atoms, DESIGN field names first. */
+/** The README.md `rings[]` JSON entry of a ring analysis: 1-based atoms, the documented field names first. */
 import type { RingAnalysis } from './ringAnalysis.js';
 
 /** JSON-ready ring entry (`inspect --json` → `records[].rings[]`). */

@@ -1,17 +1,19 @@
 /**
- * Ring shape and IUPAC ring-form descriptor from Cremer–Pople coordinates (METHODS.md §3.4, §4.1; acceptance
+ * Ring shape and IUPAC ring-form descriptor from Cremer–Pople coordinates (docs/methods.md#shape-assignment, docs/methods.md#five-ring-forms; acceptance
  * windows and planarity thresholds are common practice, no source).
  *
  * Six-rings: nearest canonical point (SIX_RING_FORMS) by great-circle distance on the unit sphere,
  * cos d = cos θ cos θc + sin θ sin θc cos(φ − φc). Five-rings: nearest point on the φ2 circle. Then
  * d ≤ 20° → the form (`quality: 'close'`); 20° < d ≤ 30° → still the nearest form, flagged `distorted` with the
  * two nearest named; d > 30° → `puckered`, no descriptor. Q (six-rings) or q2 (five-rings) below
- * `planarThresholdA` → `planar`. Other ring sizes are `planar` or `puckered`.
+ * `planarThresholdA` → `planar`. Seven- and eight-rings: the nearest named form of `mediumRingForms`, same windows,
+ * no descriptor. Other ring sizes are `planar` or `puckered`.
  */
 import type { Puckering } from '../geometry/cremerPople.js';
 import { DEG, RAD, wrap180 } from '../geometry/vec3.js';
 import { formDescriptor, type DescriptorParts } from './ringDescriptor.js';
 import { FIVE_RING_FORMS, SIX_RING_FORMS, type CanonicalForm, type RingShape } from './ringForms.js';
+import { mediumRingForms } from './mediumRingForms.js';
 
 /** Options of `classifyRing`. */
 export interface RingShapeOptions {
@@ -75,6 +77,7 @@ export function classifyRing(
   const q2 = puckering.amplitudes[0]?.q ?? 0;
   const amplitude = n === 5 ? q2 : puckering.Q;
   if (amplitude < planarThresholdA) return { shape: 'planar', ...NONE };
+  if (n === 7 || n === 8) return classifyMedium(puckering.z, closeDeg, distortedDeg);
   if (n !== 5 && n !== 6) return { shape: 'puckered', ...NONE };
   const forms = n === 6 ? SIX_RING_FORMS : FIVE_RING_FORMS;
   // The raw phase is used even where phiDeg is withheld (near the poles sin θ makes it irrelevant).
@@ -97,5 +100,18 @@ export function classifyRing(
     descriptorHtml: descriptor?.html ?? null,
     form: best.form,
     fit: { quality: best.d <= closeDeg ? 'close' : 'distorted', distanceDeg: best.d, nearest },
+  };
+}
+
+/** Seven- and eight-rings: the nearest named form on the Cremer–Pople hypersphere, same windows (no descriptor). */
+function classifyMedium(z: readonly number[], closeDeg: number, distortedDeg: number): RingClassification {
+  const ranked = mediumRingForms(z);
+  const best = ranked[0];
+  if (!best || best.distanceDeg > distortedDeg) return { shape: 'puckered', ...NONE };
+  const nearest = ranked.slice(0, 2).map(({ form, distanceDeg }) => ({ shape: form.shape, descriptor: null, distanceDeg }));
+  return {
+    shape: best.form.shape,
+    ...NONE,
+    fit: { quality: best.distanceDeg <= closeDeg ? 'close' : 'distorted', distanceDeg: best.distanceDeg, nearest },
   };
 }

@@ -1,10 +1,10 @@
 /**
- * Positions of the exocyclic bonds of a ring (METHODS.md §5): the angle α between the bond (ring atom →
+ * Positions of the exocyclic bonds of a ring (docs/methods.md#axial-equatorial): the angle α between the bond (ring atom →
  * substituent) and the Cremer–Pople normal, folded into 0–90 with |cos|; the face (side of the normal); and the
  * trade word for the position, chosen by the ring's shape and the atom's place in its canonical form.
  *
  * Words per ring atom (tags: [C: IUPAC Gold Book A00546] for axial/equatorial and the pseudo- terms of
- * allylic, five- and seven-ring positions; the rest [common practice, no source], following §5's practical rule):
+ * allylic, five- and seven-ring positions; the rest [common practice, no source], following docs/methods.md#axial-equatorial):
  * - chair: every atom `axial` / `equatorial`.
  * - half-chair (six-ring): the two exoplanar atoms `axial` / `equatorial`; the four in-plane atoms (allylic and
  *   olefinic) `pseudo-axial` / `pseudo-equatorial`.
@@ -22,7 +22,7 @@
  * atom with one (or three) bonds, α ≤ `axialMaxDeg` → axial-like, α ≥ `equatorialMinDeg` → equatorial-like,
  * otherwise `isoclinal` [thresholds: common practice, no source].
  * Trigonal-planar ring atoms (three neighbours in all, valence-angle sum ≥ `planarSumDeg`): their single in-plane
- * substituent is not classified (`position` and `face` null), as §5 advises for sp2 ring atoms.
+ * substituent is not classified (`position` and `face` null), as docs/methods.md#axial-equatorial says for sp2 ring atoms.
  */
 import { atomPosition, type Molecule, type Vec3 } from '../model/molecule.js';
 import { usageError } from '../model/errors.js';
@@ -31,7 +31,7 @@ import type { Graph } from '../perceive/graph.js';
 import type { CanonicalForm, RingShape } from './ringForms.js';
 import type { ReferencePlane } from './ringForms.js';
 
-/** Substituent position words (DESIGN.md). */
+/** Substituent position words (README.md "JSON documents", `position`). */
 export type SubstituentPosition =
   | 'axial'
   | 'equatorial'
@@ -77,6 +77,7 @@ const WORDS: Record<'plain' | 'pseudo' | 'bow', [SubstituentPosition, Substituen
 /** The role of ring position j for a ring of this shape (rules in the file comment). */
 function roleOf(j: number, shape: RingShape, form: CanonicalForm | null, plane: ReferencePlane | null): Role {
   const exoplanar = plane ? [...plane.above, ...plane.below].includes(j) : false;
+  if (form === null && shape !== 'planar') return 'pseudo'; // seven- and eight-ring forms, puckered rings
   switch (shape) {
     case 'planar':
       return 'none';

@@ -47,6 +47,7 @@ export interface LimitFlags {
   maxLineLength?: string;
   maxRecords?: string;
   maxTotalAtoms?: string;
+  altloc?: string;
 }
 
 /** Adds the limit options to the program (inherited by every command). */
@@ -55,7 +56,8 @@ export function addLimitOptions(program: Command): Command {
     .option('--max-atoms <n>', `most atoms in one record (default ${DEFAULT_LIMITS.maxAtoms})`)
     .option('--max-line-length <n>', `longest input line, characters (default ${DEFAULT_LIMITS.maxLineLength})`)
     .option('--max-records <n>', `most records read; commands that hold every record (inspect, ensemble) default to ${DEFAULT_HOLD_LIMITS.maxRecords}`)
-    .option('--max-total-atoms <n>', `most atoms over all records for commands that hold every record (default ${DEFAULT_HOLD_LIMITS.maxTotalAtoms})`);
+    .option('--max-total-atoms <n>', `most atoms over all records for commands that hold every record (default ${DEFAULT_HOLD_LIMITS.maxTotalAtoms})`)
+    .option('--altloc <which>', 'alternate location kept in PDB/mmCIF files, chosen per residue: a letter such as A, or highest-occupancy (default; ties: the first)');
 }
 
 /** Reader and hold limits from the global options of `command`'s program. */
@@ -64,7 +66,7 @@ export function limitsOf(command: Command): { read: ReadOptions; hold: HoldOptio
   const n = (flag: string, text: string | undefined): number | undefined => (text === undefined ? undefined : wholeNumber(flag, text));
   const maxRecords = n('--max-records', flags.maxRecords);
   return {
-    read: { maxAtoms: n('--max-atoms', flags.maxAtoms), maxLineLength: n('--max-line-length', flags.maxLineLength), maxRecords },
+    read: { maxAtoms: n('--max-atoms', flags.maxAtoms), maxLineLength: n('--max-line-length', flags.maxLineLength), maxRecords, ...(flags.altloc === undefined ? {} : { altLoc: flags.altloc }) },
     hold: { maxRecords, maxTotalAtoms: n('--max-total-atoms', flags.maxTotalAtoms) },
   };
 }

@@ -1,6 +1,6 @@
 /**
  * Cremer–Pople ring puckering coordinates (Cremer & Pople 1975, J. Am. Chem. Soc. 97, 1354), for rings of any
- * size N ≥ 4, with the atoms in bonded order. Formulas as METHODS.md §2.1 gives them (working formulas from
+ * size N ≥ 4, with the atoms in bonded order. Formulas as docs/methods.md#cremer-pople gives them (working formulas from
  * memory there, internally consistent: mean-plane conditions, Q² = Σq², exact inverse).
  *
  * Conventions: the geometric centroid; n = R′ × R″ normalised, which points toward the viewer who sees the
@@ -33,7 +33,7 @@ export interface Puckering {
   readonly z: readonly number[];
 }
 
-/** Below this q2 (Å) φ2 is not reported (METHODS.md §2.3, common practice, no source). */
+/** Below this q2 (Å) φ2 is not reported (docs/methods.md#cremer-pople, common practice, no source). */
 export const PHASE_THRESHOLD = 0.05;
 
 /** Mean-plane frame of a ring: centroid, Cremer–Pople normal and displacements; `null` if degenerate. */
@@ -91,7 +91,7 @@ export function cremerPople(points: readonly Vec3[], phaseThreshold = PHASE_THRE
 }
 
 /**
- * Inverse Cremer–Pople formula (METHODS.md §2.1 step 8): displacements z_j for a ring of `n` atoms from its
+ * Inverse Cremer–Pople formula (docs/methods.md#cremer-pople, step 6): displacements z_j for a ring of `n` atoms from its
  * modes. For six-rings use `sixRingModes(Q, θ, φ)`.
  */
 export function displacementsFromModes(n: number, modes: readonly PuckeringMode[]): number[] {

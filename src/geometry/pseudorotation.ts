@@ -1,7 +1,7 @@
 /**
  * Altona–Sundaralingam pseudorotation of five-membered rings (Altona & Sundaralingam 1972, J. Am. Chem. Soc. 94,
  * 8205; phase formula as the mmCIF dictionary `_struct_mon_nucl.P` gives it), and the Fourier rearrangement of
- * the same model (derived; see docs/methods.md).
+ * the same model (derived; see docs/methods.md#pseudorotation).
  *
  * Input: the five endocyclic torsions ν0…ν4 in degrees, where for a furanose ν0 = C4′–O4′–C1′–C2′,
  * ν1 = O4′–C1′–C2′–C3′, ν2 = C1′–C2′–C3′–C4′, ν3 = C2′–C3′–C4′–O4′, ν4 = C3′–C4′–O4′–C1′. For a ring in

@@ -1,6 +1,6 @@
 /**
  * Cremer–Pople puckering for one ring measured over and over (trajectories): the same formulas as
- * `cremerPople` (Cremer & Pople 1975, J. Am. Chem. Soc. 97, 1354; METHODS.md §2.1) with the sin/cos tables of
+ * `cremerPople` (Cremer & Pople 1975, J. Am. Chem. Soc. 97, 1354; docs/methods.md#cremer-pople) with the sin/cos tables of
  * the ring size computed once and the results written into a caller-owned record, so the per-frame work
  * allocates nothing. Five-rings also get the Altona–Sundaralingam phase P and amplitude τm (Altona &
  * Sundaralingam 1972, J. Am. Chem. Soc. 94, 8205), as `analyzeRing` gives them by default: P from the closed

@@ -10,7 +10,7 @@ export const COLLINEAR_EPS = 1e-6;
 
 /**
  * Torsion A–B–C–D in radians, or `null` when A–B–C or B–C–D is collinear or B and C coincide.
- * Formula: METHODS.md §1.1 (b1 = unit(C−B); v, w = A−B, D−C projected ⊥ b1; τ = atan2((b1×v)·w, v·w)).
+ * Formula: docs/methods.md#torsion (b1 = unit(C−B); v, w = A−B, D−C projected ⊥ b1; τ = atan2((b1×v)·w, v·w)).
  */
 export function torsionRad(a: Vec3, b: Vec3, c: Vec3, d: Vec3): number | null {
   const b1 = unit(sub(c, b));

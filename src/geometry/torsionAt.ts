@@ -1,5 +1,5 @@
 /**
- * Torsion A–B–C–D (IUPAC sign, METHODS.md §1.1) straight from a flat xyz array, without building vectors:
+ * Torsion A–B–C–D (IUPAC sign, docs/methods.md#torsion) straight from a flat xyz array, without building vectors:
  * the per-frame form of `torsion` for trajectories.
  */
 

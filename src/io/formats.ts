@@ -4,6 +4,8 @@
  */
 import type { FormatName } from '../model/molecule.js';
 import type { ReadLimits } from './limits.js';
+import { MmcifConsumer } from './mmcif.js';
+import { Mol2Consumer } from './mol2.js';
 import { PdbConsumer } from './pdb.js';
 import type { Conect } from './pdbLine.js';
 import { SdfConsumer } from './sdf.js';
@@ -62,6 +64,31 @@ export const FORMATS: ReadonlyMap<FormatName, FormatSpec> = new Map<FormatName, 
         return hits === 0 ? 0 : lines.some((l) => /^(ATOM  |HETATM)/.test(l)) ? 3 : 2;
       },
       consumer: (file, limits, emit, extras) => new PdbConsumer(file, limits, emit, extras.conect),
+    },
+  ],
+  [
+    'pdbqt',
+    {
+      extensions: ['.pdbqt'],
+      // AutoDock's torsion tree lines only occur in PDBQT
+      sniff: (lines) => (lines.some((l) => /^(ROOT|ENDROOT|BRANCH|TORSDOF)\b/.test(l)) && lines.some((l) => /^(ATOM  |HETATM)/.test(l)) ? 3 : 0),
+      consumer: (file, limits, emit, extras) => new PdbConsumer(file, limits, emit, extras.conect, 'pdbqt'),
+    },
+  ],
+  [
+    'mmcif',
+    {
+      extensions: ['.cif', '.mmcif'],
+      sniff: (lines) => (lines.some((l) => l.startsWith('_atom_site.')) ? 3 : lines.some((l) => l.startsWith('data_')) ? 1 : 0),
+      consumer: (file, limits, emit) => new MmcifConsumer(file, limits, emit),
+    },
+  ],
+  [
+    'mol2',
+    {
+      extensions: ['.mol2', '.ml2'],
+      sniff: (lines) => (lines.some((l) => l.startsWith('@<TRIPOS>')) ? 3 : 0),
+      consumer: (file, limits, emit) => new Mol2Consumer(file, limits, emit),
     },
   ],
 ]);

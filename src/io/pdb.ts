@@ -1,21 +1,32 @@
 /**
- * PDB reader as a push-style line consumer: ATOM/HETATM (first alternate location only), CONECT (→ bonds,
- * deduplicated, order 1), MODEL/ENDMDL (→ frames). Title from TITLE, else COMPND, else HEADER, else the file
- * name. CONECT records usually follow the last model, so without a `conect` list given up front the models
- * are held until the end of the input; `readRecords` scans a PDB file's CONECT lines first and streams.
+ * PDB (and PDBQT) reader as a push-style line consumer: ATOM/HETATM with one alternate location per residue
+ * (see `keepAltLocs`), CONECT (→ bonds, order 1, per model where they fit: see `conectBonds`), MODEL/ENDMDL
+ * and bare `END` lines (→ frames). Title from TITLE, else COMPND, else HEADER, else the file name. CRYST1 (the periodic
+ * cell) → the `CRYST1` property, `a b c α β γ`. CONECT
+ * records usually follow the last model, so without a `conect` list given up front the models are held until
+ * the end of the input; `readRecords` scans a PDB file's CONECT lines first and streams.
  */
+import type { Atom } from '../model/molecule.js';
 import type { Issue } from '../model/errors.js';
 import type { ReadLimits } from './limits.js';
-import { parseConect, parsePdbAtom, type Conect } from './pdbLine.js';
+import { keepAltLocs, type PendingAtom } from './pdbAltLoc.js';
+import { conectBonds } from './pdbConect.js';
+import { parseConect, parsePdbAtom, type Conect, type PdbDialect } from './pdbLine.js';
 import { RecordBuilder } from './recordBuilder.js';
 import { failure, issue, type Emit, type LineConsumer } from './sink.js';
+
+/** Column ends of a, b, c, α, β, γ in a CRYST1 record (the first field starts at column 7). */
+const CRYST1_ENDS = [15, 24, 33, 40, 47, 54];
 
 interface Model {
   readonly builder: RecordBuilder;
   readonly serials: Map<number, number>;
+  readonly dropped: Set<number>;
   readonly index: number;
   readonly line: number;
-  altLoc: string;
+  /** Atoms of the residue being read, kept back until it is complete. */
+  pending: PendingAtom<{ atom: Atom; x: number; y: number; z: number; line: number; serial: number }>[];
+  residueKey: string;
   failed: boolean;
 }
 
@@ -25,8 +36,13 @@ export class PdbConsumer implements LineConsumer {
   private held: Model[] = [];
   private conect: Conect[];
   private readonly streaming: boolean;
+  /** Element of each serial where it first appeared (the atoms CONECT records describe). */
+  private readonly reference = new Map<number, string>();
   private count = 0;
+  private explicitModels = false;
   private stopped = false;
+  /** The last CRYST1 cell, `a b c α β γ` (Å, degrees), passed on as the `CRYST1` property of each model. */
+  private cryst1 = '';
 
   /** `conect`: the file's CONECT records, when already known (then each model is emitted at ENDMDL). */
   constructor(
@@ -34,6 +50,7 @@ export class PdbConsumer implements LineConsumer {
     private readonly limits: ReadLimits,
     private readonly emit: Emit,
     conect?: readonly Conect[],
+    private readonly dialect: PdbDialect = 'pdb',
   ) {
     this.conect = conect ? [...conect] : [];
     this.streaming = conect !== undefined;
@@ -43,9 +60,11 @@ export class PdbConsumer implements LineConsumer {
     if (this.stopped) return;
     const tag = line.slice(0, 6).trimEnd();
     if (tag === 'ATOM' || tag === 'HETATM') return this.atom(line, lineNo);
-    if (tag === 'MODEL') return this.startModel(lineNo);
-    if (tag === 'ENDMDL') return this.closeModel();
-    if (tag === 'END') return this.end();
+    if (tag === 'MODEL') {
+      this.explicitModels = true;
+      return this.startModel(lineNo);
+    }
+    if (tag === 'ENDMDL' || tag === 'END') return this.closeModel();
     if (tag === 'CONECT') {
       if (this.streaming) return;
       const c = parseConect(line, lineNo);
@@ -53,6 +72,12 @@ export class PdbConsumer implements LineConsumer {
       this.conect.push(c);
       return;
     }
+    if (tag === 'CRYST1') {
+      const cell = CRYST1_ENDS.map((end, k) => line.slice(k === 0 ? 6 : CRYST1_ENDS[k - 1], end).trim());
+      this.cryst1 = cell.every((f) => f !== '' && Number.isFinite(Number(f))) ? cell.join(' ') : '';
+      return;
+    }
+    if (tag === 'TER') return this.flushResidue();
     if (tag === 'TITLE' || tag === 'COMPND' || tag === 'HEADER') {
       const text = (tag === 'HEADER' ? line.slice(10, 50) : line.slice(10, 80)).trim();
       this.titles[tag] = this.titles[tag] ? `${this.titles[tag]} ${text}` : text;
@@ -73,27 +98,55 @@ export class PdbConsumer implements LineConsumer {
       const message = `more than ${this.limits.maxRecords} records (option maxRecords)`;
       return this.fatal(issue('too-many-records', this.file, lineNo, message));
     }
-    const builder = new RecordBuilder(this.file, 'pdb', this.limits);
-    this.model = { builder, serials: new Map(), index: this.count, line: lineNo, altLoc: '', failed: false };
+    const builder = new RecordBuilder(this.file, this.dialect, this.limits);
+    this.model = { builder, serials: new Map(), dropped: new Set(), index: this.count, line: lineNo, pending: [], residueKey: '', failed: false };
   }
 
   private atom(line: string, lineNo: number): void {
     if (!this.model) this.startModel(lineNo);
     const m = this.model;
     if (!m || m.failed) return;
-    const a = parsePdbAtom(line);
+    const a = parsePdbAtom(line, this.dialect);
     if ('code' in a) return this.failModel(m, issue(a.code, this.file, lineNo, a.message));
-    if (a.altLoc !== ' ' && a.altLoc !== '') {
-      if (m.altLoc === '') m.altLoc = a.altLoc;
-      else if (a.altLoc !== m.altLoc) return;
+    const key = `${a.chain}|${line.slice(22, 27)}`;
+    if (key !== m.residueKey) {
+      this.flushResidue();
+      m.residueKey = key;
     }
-    if (a.serial >= 0 && !m.serials.has(a.serial)) m.serials.set(a.serial, m.builder.atomCount);
-    const atom = { element: a.element, name: a.name, residue: a.residue, charge: a.charge };
-    const err = m.builder.addAtom(atom, a.x, a.y, a.z, lineNo);
-    if (err) this.failModel(m, err);
+    const atom: Atom = {
+      element: a.element,
+      name: a.name,
+      residue: a.residue,
+      ...(Number.isNaN(a.residueNumber) ? {} : { residueNumber: a.residueNumber }),
+      insertionCode: a.insertionCode,
+      chain: a.chain,
+      ...(a.serial >= 0 ? { serial: a.serial } : {}),
+      altLoc: a.altLoc.trim(),
+      charge: a.charge,
+      ...(a.partialCharge === undefined ? {} : { partialCharge: a.partialCharge }),
+    };
+    m.pending.push({ name: a.name, altLoc: a.altLoc.trim(), occupancy: a.occupancy, payload: { atom, x: a.x, y: a.y, z: a.z, line: lineNo, serial: a.serial } });
+  }
+
+  /** Adds the current residue's atoms to the model, one alternate location kept. */
+  private flushResidue(): void {
+    const m = this.model;
+    if (!m || m.failed || m.pending.length === 0) return;
+    const { kept, dropped } = keepAltLocs(m.pending, this.limits.altLoc);
+    m.pending = [];
+    for (const d of dropped) if (d.payload.serial >= 0) m.dropped.add(d.payload.serial);
+    for (const { payload: p } of kept) {
+      if (p.serial >= 0 && !m.serials.has(p.serial)) {
+        m.serials.set(p.serial, m.builder.atomCount);
+        if (!this.reference.has(p.serial)) this.reference.set(p.serial, p.atom.element);
+      }
+      const err = m.builder.addAtom(p.atom, p.x, p.y, p.z, p.line);
+      if (err) return this.failModel(m, err);
+    }
   }
 
   private closeModel(): void {
+    this.flushResidue();
     const m = this.model;
     this.model = null;
     if (!m || m.failed) return;
@@ -101,30 +154,31 @@ export class PdbConsumer implements LineConsumer {
     else this.held.push(m);
   }
 
-  /** Applies CONECT bonds and emits the model. */
+  /** Applies CONECT bonds where they fit the model, and emits it. */
   private release(m: Model): void {
-    for (const c of this.conect) {
-      const a = m.serials.get(c.serial);
-      for (const partner of [c.serial, ...c.partners]) {
-        if (!m.serials.has(partner)) {
-          const where = this.count > 1 ? ` in model ${m.index}` : '';
-          const message = `CONECT refers to atom serial ${partner}, which is not in the file${where}`;
-          return this.emit(failure(issue('bad-bond', this.file, c.line, message)));
-        }
-      }
-      for (const partner of c.partners) {
-        const b = m.serials.get(partner)!;
-        if (b !== a) m.builder.addBond(a!, b, 1);
-      }
+    let withBonds = this.conect.length > 0;
+    if (withBonds) {
+      const { bonds, warning, error } = conectBonds(this.conect, {
+        serials: m.serials,
+        dropped: m.dropped,
+        elements: m.builder.atoms.map((a) => a.element),
+        coords: m.builder.coordinateBuffer,
+        index: this.count > 1 || this.explicitModels ? m.index : 0,
+      }, this.reference, !this.streaming || !this.explicitModels);
+      if (error) return this.emit(failure(issue('bad-bond', this.file, error.line, error.message)));
+      if (warning) m.builder.addWarning(warning);
+      if (bonds === null) withBonds = false;
+      else for (const [a, b] of bonds) m.builder.addBond(a, b, 1);
     }
     const title = this.titles.TITLE || this.titles.COMPND || this.titles.HEADER || baseName(this.file);
-    const result = m.builder.finish(title, {}, m.index, m.line, this.conect.length > 0);
+    const result = m.builder.finish(title, this.cryst1 ? { CRYST1: this.cryst1 } : {}, m.index, m.line, withBonds);
     if ('code' in result) this.emit(failure(result));
     else this.emit({ ok: true, molecule: result });
   }
 
   private failModel(m: Model, i: Issue): void {
     m.failed = true;
+    m.pending = [];
     this.emit(failure(i));
   }
 

@@ -6,21 +6,34 @@ import { elementInfo } from '../model/elements.js';
 import { parseNumber, scanCount } from './numbers.js';
 import { quote } from './sink.js';
 
+/** Plain PDB, or PDBQT (AutoDock: partial charge in columns 71-76, atom type in columns 78-79). */
+export type PdbDialect = 'pdb' | 'pdbqt';
+
 /** One parsed ATOM/HETATM line. */
 export interface PdbAtom {
   readonly serial: number;
   readonly name: string;
   readonly altLoc: string;
   readonly residue: string;
+  /** Chain identifier (column 22), `''` when blank. */
+  readonly chain: string;
+  /** Residue sequence number (columns 23-26); NaN when blank or not a number. */
+  readonly residueNumber: number;
+  /** Insertion code (column 27), `''` when blank. */
+  readonly insertionCode: string;
+  /** Occupancy (columns 55-60), 1 when blank. */
+  readonly occupancy: number;
   readonly element: string;
   readonly x: number;
   readonly y: number;
   readonly z: number;
   readonly charge: number;
+  /** PDBQT partial charge (columns 71-76). */
+  readonly partialCharge?: number;
 }
 
 /** Parses an ATOM/HETATM line, or returns `{ code, message }`. */
-export function parsePdbAtom(line: string): PdbAtom | { code: string; message: string } {
+export function parsePdbAtom(line: string, dialect: PdbDialect = 'pdb'): PdbAtom | { code: string; message: string } {
   const xyz = [parseNumber(line.slice(30, 38)), parseNumber(line.slice(38, 46)), parseNumber(line.slice(46, 54))];
   const bad = xyz.findIndex((v) => !Number.isFinite(v));
   if (bad >= 0) {
@@ -29,10 +42,11 @@ export function parsePdbAtom(line: string): PdbAtom | { code: string; message: s
     return { code: 'bad-number', message: `${'xyz'[bad]} coordinate ${quote(text)} ${what} (columns ${31 + 8 * bad}-${38 + 8 * bad})` };
   }
   const rawName = line.slice(12, 16);
-  const column = line.slice(76, 78).trim();
-  const element = column !== '' ? elementInfo(column)?.symbol : elementFromName(rawName);
+  const qt = dialect === 'pdbqt';
+  const column = (qt ? line.slice(77, 79) : line.slice(76, 78)).trim();
+  const element = column !== '' ? (qt ? autodockElement(column) : elementInfo(column)?.symbol) : elementFromName(rawName);
   if (!element) {
-    const what = column !== '' ? `unknown element ${quote(column)} (columns 77-78)` : `no element for atom name ${quote(rawName)}`;
+    const what = column !== '' ? `unknown ${qt ? 'atom type' : 'element'} ${quote(column)} (columns ${qt ? '78-79' : '77-78'})` : `no element for atom name ${quote(rawName)}`;
     return { code: 'unknown-element', message: what };
   }
   const serialText = line.slice(6, 11).trim();
@@ -41,12 +55,33 @@ export function parsePdbAtom(line: string): PdbAtom | { code: string; message: s
     name: rawName.trim(),
     altLoc: line.charAt(16),
     residue: line.slice(17, 20).trim(),
+    chain: line.charAt(21).trim(),
+    residueNumber: residueSeq(line.slice(22, 26)),
+    insertionCode: line.charAt(26).trim(),
+    occupancy: occupancyOf(line.slice(54, 60)),
     element,
     x: xyz[0]!,
     y: xyz[1]!,
     z: xyz[2]!,
-    charge: parseCharge(line.slice(78, 80)),
+    charge: qt ? 0 : parseCharge(line.slice(78, 80)),
+    ...(qt && Number.isFinite(parseNumber(line.slice(70, 76))) ? { partialCharge: parseNumber(line.slice(70, 76)) } : {}),
   };
+}
+
+/**
+ * Element of an AutoDock 4 atom type (Morris et al. 2009, J. Comput. Chem. 30, 2785): A is aromatic carbon,
+ * NA/NS/OA/OS/SA acceptor nitrogen/oxygen/sulfur, HD/HS donor hydrogens; G0–G9/CG0–CG9 are glue pseudo-atoms
+ * read as carbon; other types are element symbols.
+ */
+export function autodockElement(type: string): string | undefined {
+  const t = type.trim();
+  const upper = t.toUpperCase();
+  if (upper === 'A' || /^C?G\d$/.test(upper)) return 'C';
+  if (upper === 'NA' || upper === 'NS') return 'N';
+  if (upper === 'OA' || upper === 'OS') return 'O';
+  if (upper === 'SA') return 'S';
+  if (upper === 'HD' || upper === 'HS') return 'H';
+  return elementInfo(t)?.symbol;
 }
 
 /**
@@ -65,6 +100,17 @@ export function elementFromName(rawName: string): string | undefined {
   }
   const letter = /[A-Za-z]/.exec(name.slice(1))?.[0];
   return letter ? elementInfo(letter)?.symbol : undefined;
+}
+
+/** resSeq as an integer (hybrid-36 and other non-numeric text give NaN: the atom then has no residue number). */
+function residueSeq(text: string): number {
+  const t = text.trim();
+  return /^-?\d+$/.test(t) ? Number(t) : Number.NaN;
+}
+
+function occupancyOf(text: string): number {
+  const v = parseNumber(text);
+  return Number.isFinite(v) ? v : 1;
 }
 
 function parseCharge(text: string): number {

@@ -156,6 +156,6 @@ async function readHead(
 
 /** PDB files (not standard input) get their CONECT records scanned first, so models can be streamed. */
 async function consumerExtras(path: string, format: FormatName, limits: ReadLimits, extras: StreamExtras): Promise<ConsumerExtras> {
-  if (format !== 'pdb' || path === '-') return { pool: extras.pool };
+  if ((format !== 'pdb' && format !== 'pdbqt') || path === '-') return { pool: extras.pool };
   return { pool: extras.pool, conect: await scanConect(path, limits) };
 }

@@ -5,6 +5,8 @@
 import type { Atom, Bond, FormatName, Molecule } from '../model/molecule.js';
 import type { Issue } from '../model/errors.js';
 import type { ReadLimits } from './limits.js';
+import type { Warning } from '../model/errors.js';
+import { residueContacts, sameResidueMessage } from './residueContacts.js';
 import { findOverlap, overlapMessage } from './overlap.js';
 import { issue } from './sink.js';
 
@@ -19,6 +21,7 @@ export class RecordBuilder {
   /** Allocated on the first atom or by `reserve`, so a record with a counts line gets one exact buffer. */
   private coords = NO_COORDS;
   private bonds: Bond[] = [];
+  private warnings: Warning[] = [];
 
   constructor(
     private readonly file: string,
@@ -52,6 +55,16 @@ export class RecordBuilder {
     this.atomLines?.push(line);
     this.atoms.push(atom);
     return null;
+  }
+
+  /** The coordinate buffer so far (x, y, z of atom i at 3i…; may be longer than 3 × atomCount). */
+  get coordinateBuffer(): Float64Array {
+    return this.coords;
+  }
+
+  /** Records something the reader read past; it travels with the record. */
+  addWarning(w: Warning): void {
+    this.warnings.push(w);
   }
 
   /** Makes room for `n` atoms (a hint from a counts line; never trusted beyond `maxAtoms`). */
@@ -96,11 +109,18 @@ export class RecordBuilder {
     const n = this.atoms.length;
     if (n === 0) return issue('empty-record', this.file, line, 'record has no atoms');
     const coords = this.coords.length === 3 * n ? this.coords : this.coords.slice(0, 3 * n);
-    const pair = findOverlap(coords, n, this.limits.minDistanceA);
+    const lineOf = (j: number): number => this.atomLines?.[j] ?? this.firstLine + j;
+    if (this.atoms[0]!.residue !== undefined) {
+      // structure files: close contacts between residues, alternates or waters are warnings, not errors
+      const contacts = residueContacts(this.atoms, coords, this.limits.minDistanceA);
+      if (contacts.error) return issue('overlapping-atoms', this.file, lineOf(contacts.error[1]), sameResidueMessage(this.atoms, coords, contacts.error[0], contacts.error[1], this.limits.minDistanceA));
+      this.warnings.push(...contacts.warnings);
+    }
+    const pair = this.atoms[0]!.residue !== undefined ? null : findOverlap(coords, n, this.limits.minDistanceA);
     if (pair) {
       const [i, j] = pair;
       const message = overlapMessage(this.atoms, coords, i, j, this.limits.minDistanceA);
-      return issue('overlapping-atoms', this.file, this.atomLines?.[j] ?? this.firstLine + j, message);
+      return issue('overlapping-atoms', this.file, lineOf(j), message);
     }
     return {
       title,
@@ -109,6 +129,7 @@ export class RecordBuilder {
       bonds: withBonds ? this.uniqueBonds() : null,
       properties,
       source: { file: this.file, format: this.format, index, line },
+      ...(this.warnings.length > 0 ? { warnings: this.warnings } : {}),
     };
   }
 }

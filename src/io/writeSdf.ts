@@ -1,5 +1,5 @@
 /**
- * MDL molfile / SD file writer (our own; openchemlib's `toMolfile` rescales coordinates, LIBRARIES.md).
+ * MDL molfile / SD file writer (our own; openchemlib's `toMolfile` rescales coordinates, seen with openchemlib 9.25).
  * Each record: title line, a fixed program line (no timestamp, so output is byte-identical run to run), a
  * comment line, the connection table, `M  CHG`, `M  END`, one `> <name>` data field per property, `$$$$`.
  * V2000 is written while atoms and bonds both fit in three digits (≤ 999), V3000 beyond that.

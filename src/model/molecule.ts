@@ -1,7 +1,7 @@
 /** Core data types shared by every layer. Atom indices are 0-based inside the library, 1-based for users. */
 
 /** Input formats conformark reads. */
-export type FormatName = 'xyz' | 'sdf' | 'pdb';
+export type FormatName = 'xyz' | 'sdf' | 'pdb' | 'pdbqt' | 'mmcif' | 'mol2';
 
 /** One atom as read from a file. */
 export interface Atom {
@@ -21,6 +21,8 @@ export interface Atom {
   readonly serial?: number;
   /** Alternate-location letter of the copy kept (`''` when the atom had none). */
   readonly altLoc?: string;
+  /** Partial charge from the file (PDBQT columns 71-76, MOL2 charge column), when it has one. */
+  readonly partialCharge?: number;
   /** Formal charge from the file (molfile), 0 when absent. */
   readonly charge?: number;
 }
@@ -59,6 +61,8 @@ export interface Molecule {
   /** SD data fields or XYZ `key=value` comment properties, in file order. */
   readonly properties: Readonly<Record<string, string>>;
   readonly source: RecordSource;
+  /** What the reader noticed but read past (close contacts between residues, CONECT not applied …). */
+  readonly warnings?: readonly { readonly code: string; readonly message: string }[];
 }
 
 /** A 3-vector in Å (or a unit direction). */

@@ -1,6 +1,7 @@
 /** Bond selections: `3-4` (atom tokens joined by `-`) and comma-separated lists `1-2,3-4`. */
 import type { Molecule } from '../model/molecule.js';
 import { atomIndex, selectionError } from './atomIndex.js';
+import { splitAtomList } from './atomSelection.js';
 import type { Graph } from './graph.js';
 
 /**
@@ -11,7 +12,7 @@ import type { Graph } from './graph.js';
  * @example bondSelection(mol, graph, '3-4') // [2, 3]
  */
 export function bondSelection(mol: Molecule, graph: Graph, text: string): [number, number] {
-  const parts = text.split('-');
+  const parts = splitAtomList(text);
   if (parts.length !== 2 || parts.some((p) => p.trim() === '')) {
     throw selectionError(mol, 'bad-selection', `bond '${text}' should be two atoms joined by '-', e.g. 3-4`);
   }

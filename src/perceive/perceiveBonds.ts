@@ -1,6 +1,6 @@
 /**
  * Bonds from coordinates: atoms i and j are bonded when 0.4 Å ≤ d_ij ≤ r_i + r_j + ε, with r the Cordero et
- * al. 2008 (Dalton Trans. 2832) covalent radius (METHODS.md §7). Candidate pairs come from a uniform spatial
+ * al. 2008 (Dalton Trans. 2832) covalent radius (docs/methods.md#bond-perception). Candidate pairs come from a uniform spatial
  * grid, so the work is linear in the number of atoms.
  */
 import { elementInfo } from '../model/elements.js';
@@ -12,15 +12,15 @@ import { scratchInt32, scratchUint8 } from './scratch.js';
 /** Options of {@link perceiveBonds}. */
 export interface PerceiveBondsOptions {
   /**
-   * Tolerance ε added to the sum of covalent radii, in Å. Default 0.40 (METHODS.md §7: 0.40–0.45 Å is
+   * Tolerance ε added to the sum of covalent radii, in Å. Default 0.40 (docs/methods.md#bond-perception: 0.40–0.45 Å is
    * common practice, no source).
    */
   readonly toleranceA?: number;
 }
 
-/** Default ε of the bond test, Å (METHODS.md §7). */
+/** Default ε of the bond test, Å (docs/methods.md#bond-perception). */
 export const BOND_TOLERANCE_A = 0.4;
-/** Pairs closer than this are overlapping or duplicated atoms, never bonds, Å (METHODS.md §7). */
+/** Pairs closer than this are overlapping or duplicated atoms, never bonds, Å (docs/methods.md#bond-perception). */
 export const MIN_BOND_LENGTH_A = 0.4;
 
 /** Non-metals: the carbon valence cap counts only bonds to these. */

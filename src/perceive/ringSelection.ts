@@ -1,18 +1,17 @@
-/** Ring selections: a ring number as listed by `inspect`, or an ordered atom list `1-2-3-4-5-6`. */
+/** One ring from a ring token (number, atom list, residue or residue name), for commands that draw one ring. */
 import type { Molecule } from '../model/molecule.js';
-import { atomIndex, selectionError } from './atomIndex.js';
+import { selectionError, selectRings } from './atomSelection.js';
 import type { Graph } from './graph.js';
 
 /**
- * Resolves a ring selection to 0-based atoms in cyclic order.
- * - A plain number `k` is the k-th ring of `rings` (1-based, the numbering `inspect` prints); a copy of it is
- *   returned.
- * - Otherwise the text is an atom list `a-b-c-…` (numbers or names, at least 3 distinct atoms) that must be a
- *   closed walk along bonds, last atom bonded to the first; repeating the first atom at the end is allowed.
- *   The atoms are used in exactly that order (it fixes the Cremer–Pople numbering); the ring need not be
- *   one of `rings`.
+ * Resolves a ring selection to the 0-based atoms of exactly one ring, in cyclic order (see
+ * {@link selectRings} for the tokens: `2`, `1-2-3-4-5-6`, `O5-C1-C2-C3-C4-C5`, `A/NAG501/`, `name:BGC`).
+ * An atom list is used in exactly its order and must be a closed walk along bonds; repeating the first atom
+ * at the end is allowed. A residue or name token that selects several rings is an `ambiguous-ring` error
+ * listing them.
  *
- * Errors (`ConformarkError`): `unknown-ring`, `bad-selection`, `not-bonded`, and those of {@link atomIndex}.
+ * Errors (`ConformarkError`): `unknown-ring`, `no-ring`, `ambiguous-ring`, `bad-selection`, `not-bonded`,
+ * and those of `selectAtom`.
  * @example ringSelection(mol, graph, rings, '1') // rings[0]
  * @example ringSelection(mol, graph, rings, 'O5-C1-C2-C3-C4-C5') // pyranose order
  */
@@ -22,37 +21,14 @@ export function ringSelection(
   rings: readonly (readonly number[])[],
   text: string,
 ): number[] {
-  const trimmed = text.trim();
-  if (/^\d+$/.test(trimmed)) {
-    const k = Number(trimmed);
-    const ring = rings[k - 1];
-    if (k < 1 || !ring) {
-      const have = rings.length === 0 ? 'the record has no rings' : `the record has ${rings.length} ring${rings.length === 1 ? '' : 's'}`;
-      throw selectionError(mol, 'unknown-ring', `ring ${trimmed} does not exist (${have})`);
-    }
-    return ring.slice();
+  const found = selectRings(mol, text, rings, graph);
+  if (found.length > 1) {
+    const shown = found.slice(0, 8).map((ring) => {
+      const k = rings.findIndex((r) => r.length === ring.length && r.every((a, i) => a === ring[i]));
+      return `ring ${k + 1} (${ring.map((a) => a + 1).join('-')})`;
+    });
+    const more = found.length > 8 ? ` and ${found.length - 8} more` : '';
+    throw selectionError(mol, 'ambiguous-ring', `'${text.trim()}' selects ${found.length} rings: ${shown.join(', ')}${more}; this command takes one, give its ring number or a single residue`);
   }
-  const parts = trimmed.split('-');
-  if (parts.some((p) => p.trim() === '')) {
-    throw selectionError(mol, 'bad-selection', `ring '${text}' should be a ring number or atoms joined by '-', e.g. 1-2-3-4-5-6`);
-  }
-  const atoms = parts.map((p) => atomIndex(mol, p));
-  if (atoms.length > 3 && atoms[0] === atoms[atoms.length - 1]) atoms.pop();
-  if (atoms.length < 3) {
-    throw selectionError(mol, 'bad-selection', `ring '${text}' needs at least 3 atoms (or a ring number)`);
-  }
-  if (new Set(atoms).size !== atoms.length) {
-    throw selectionError(mol, 'bad-selection', `ring '${text}' visits an atom twice; list each ring atom once`);
-  }
-  atoms.forEach((a, k) => {
-    const b = atoms[(k + 1) % atoms.length]!;
-    if (!graph.bonded(a, b)) {
-      throw selectionError(
-        mol,
-        'not-bonded',
-        `atoms ${a + 1} and ${b + 1} are not bonded, so '${text}' is not a closed ring walk`,
-      );
-    }
-  });
-  return atoms;
+  return found[0]!;
 }

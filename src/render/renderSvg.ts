@@ -1,5 +1,5 @@
 /**
- * Scene + theme → semantic SVG text (DESIGN.md "Figures"): every primitive carries its role as `class`, bonds
+ * Scene + theme → semantic SVG text (README.md "Figures and themes"): every primitive carries its role as `class`, bonds
  * carry `data-atoms="i j"` (1-based, start atom first), labels `data-atom`; ids come from the figure's own
  * prefix; numbers are rounded here, once. No scripts, event attributes or external references can arise:
  * every attribute value is a number, an escaped string or a validated theme value.

@@ -1,5 +1,5 @@
 /**
- * One svgdom window for the whole process (reused: faster than a window per figure, LIBRARIES.md), with the
+ * One svgdom window for the whole process (reused: faster than a window per figure, measured here), with the
  * shipped DejaVu Sans mapped for text measurement. Only measuring needs it: renderSvg writes markup directly.
  */
 import { fileURLToPath } from 'node:url';

@@ -13,13 +13,13 @@ const closeRel = (actual: number | undefined, expected: number, rel: number) =>
   expect(Math.abs(actual! - expected)).toBeLessThanOrEqual(rel * Math.abs(expected));
 
 describe('boltzmannPopulations', () => {
-  it('boltzmannPopulations reproduces the METHODS.md §9 butane check values, g_gauche = 2 (derived arithmetic, 1e-4 relative)', () => {
+  it('boltzmannPopulations reproduces the docs/methods.md#boltzmann butane check values, g_gauche = 2 (derived arithmetic, 1e-4 relative)', () => {
     closeRel(boltzmannPopulations([0, 0.66], { degeneracies: [1, 2] }).populations[1], 0.3963, 1e-4);
     closeRel(boltzmannPopulations([0, 0.9], { degeneracies: [1, 2] }).populations[1], 0.3045, 1e-4);
     closeRel(boltzmannPopulations([0, 3.8], { unit: 'kJ/mol', degeneracies: [1, 2] }).populations[1], 0.3016, 1e-4);
   });
 
-  it('boltzmannPopulations reproduces the methylcyclohexane check values x_eq 0.9496 (K 18.86) and 0.9463 (K 17.62) (derived, METHODS.md §9)', () => {
+  it('boltzmannPopulations reproduces the methylcyclohexane check values x_eq 0.9496 (K 18.86) and 0.9463 (K 17.62) (derived, docs/methods.md#boltzmann)', () => {
     const a = boltzmannPopulations([0, 1.74]).populations;
     const b = boltzmannPopulations([0, 1.7]).populations;
     closeRel(a[0], 0.9496, 1e-4);
@@ -28,13 +28,13 @@ describe('boltzmannPopulations', () => {
     closeRel(b[0]! / b[1]!, 17.62, 1e-3);
   });
 
-  it('boltzmannPopulations gives t-Bu x_ax 2.56e-4 (A 4.9) and twist-boat 9.3e-5 (5.5) to the printed precision (derived, METHODS.md §9)', () => {
+  it('boltzmannPopulations gives t-Bu x_ax 2.56e-4 (A 4.9) and twist-boat 9.3e-5 (5.5) to the printed precision (derived, docs/methods.md#boltzmann)', () => {
     // these two are printed with 3 and 2 significant figures, so the tolerance is half a unit in the last digit
     expect(Math.abs(boltzmannPopulations([0, 4.9]).populations[1]! - 2.56e-4)).toBeLessThanOrEqual(0.005e-4);
     expect(Math.abs(boltzmannPopulations([0, 5.5]).populations[1]! - 9.3e-5)).toBeLessThanOrEqual(0.05e-5);
   });
 
-  it('boltzmannPopulations uses RT = 0.592485 kcal/mol = 2.478957 kJ/mol at 298.15 K (derived, METHODS.md §9)', () => {
+  it('boltzmannPopulations uses RT = 0.592485 kcal/mol = 2.478957 kJ/mol at 298.15 K (derived, docs/methods.md#boltzmann)', () => {
     expect(GAS_CONSTANT_KCAL * 298.15).toBeCloseTo(0.592485, 6);
     expect(GAS_CONSTANT_KJ * 298.15).toBeCloseTo(2.478957, 6);
     expect(GAS_CONSTANT_KJ / 4.184).toBeCloseTo(GAS_CONSTANT_KCAL, 12);
@@ -49,7 +49,7 @@ describe('boltzmannPopulations', () => {
     expect(r.populations[1]! / r.populations[0]!).toBeCloseTo(Math.exp(-0.627509474 / (GAS_CONSTANT_KCAL * 298.15)), 9);
   });
 
-  it('boltzmannPopulations with degeneracy g equals shifting ΔE by −RT ln g (METHODS.md §9)', () => {
+  it('boltzmannPopulations with degeneracy g equals shifting ΔE by −RT ln g (docs/methods.md#boltzmann)', () => {
     fc.assert(
       fc.property(
         fc.array(fc.double({ min: -5, max: 5, noNaN: true }), { minLength: 1, maxLength: 8 }),

@@ -17,7 +17,7 @@ import { mmffConformer } from '../helpers/fromOpenchemlib.js';
 
 const graphOf = (m: Molecule) => buildGraph(m.atoms.length, m.bonds!);
 
-/** ax/eq of the C–H bond by its angle to the ring mean-plane normal (METHODS.md §5 method 1). */
+/** ax/eq of the C–H bond by its angle to the ring mean-plane normal (docs/methods.md#axial-equatorial method 1). */
 function classifier(m: Molecule, ring: readonly number[]) {
   const { normal } = meanPlane(ring.map((i) => atomPosition(m, i)))!;
   return (c: number, h: number) => {
@@ -41,7 +41,7 @@ function byKind(m: Molecule, ring: readonly number[], options: CouplingOptions =
 
 const RING = [0, 1, 2, 3, 4, 5];
 
-describe('ringCouplings on the cyclohexane chair model (METHODS.md §5, derived)', () => {
+describe('ringCouplings on the cyclohexane chair model (docs/methods.md#axial-equatorial, derived)', () => {
   const chair = cyclohexaneChair();
 
   it('ringCouplings finds 24 couplings with torsions ±172.5 (aa), ±54.9 (ae), ±62.7 (ee)', () => {
@@ -52,14 +52,14 @@ describe('ringCouplings on the cyclohexane chair model (METHODS.md §5, derived)
     for (const c of k.ee!) expect(Math.abs(c.torsionDeg)).toBeCloseTo(62.7, 1);
   });
 
-  it("ringCouplings with set A gives J_aa 13.14, J_ae 3.93, J_ee 2.40 Hz within 0.05 on the same model (METHODS allows ±0.3; Haasnoot, de Leeuw & Altona 1980, Tetrahedron 36, 2783; derived, METHODS.md §6.2)", () => {
+  it("ringCouplings with set A gives J_aa 13.14, J_ae 3.93, J_ee 2.40 Hz within 0.05 on the same model (model tolerance ±0.3 Hz; Haasnoot, de Leeuw & Altona 1980, Tetrahedron 36, 2783; derived, docs/methods.md#haasnoot)", () => {
     const k = byKind(chair, RING, { haasnootSet: 'a' });
     for (const c of k.aa!) expect(c.jHz).toBeCloseTo(13.14, 1);
     for (const c of k.ae!) expect(c.jHz).toBeCloseTo(3.93, 1);
     for (const c of k.ee!) expect(c.jHz).toBeCloseTo(2.4, 1);
   });
 
-  it('ringCouplings by default picks set C (two ring-carbon substituents) with the β correction: 13.27, 3.95, 2.52 Hz (derived, METHODS.md §6.2)', () => {
+  it('ringCouplings by default picks set C (two ring-carbon substituents) with the β correction: 13.27, 3.95, 2.52 Hz (derived, docs/methods.md#haasnoot)', () => {
     const k = byKind(chair, RING);
     for (const c of [...k.aa!, ...k.ae!, ...k.ee!]) expect(c.haasnootSet).toBe('c');
     for (const c of k.aa!) expect(c.jHz).toBeCloseTo(13.27, 1);
@@ -77,7 +77,7 @@ describe('ringCouplings on the cyclohexane chair model (METHODS.md §5, derived)
 });
 
 describe('couplings on openchemlib MMFF94s structures', () => {
-  it('ringCouplings on an MMFF94s cyclohexane chair: J_aa in 10–13.5 Hz, J_ae and J_ee in 1.5–5 Hz (typical observed ranges, METHODS.md §6.3, from memory)', () => {
+  it('ringCouplings on an MMFF94s cyclohexane chair: J_aa in 10–13.5 Hz, J_ae and J_ee in 1.5–5 Hz (typical observed ranges, docs/methods.md#observed-couplings, from memory)', () => {
     const m = mmffConformer('C1CCCCC1');
     const k = byKind(m, RING);
     expect([k.aa!.length, k.ae!.length, k.ee!.length]).toEqual([6, 12, 6]);
@@ -85,7 +85,7 @@ describe('couplings on openchemlib MMFF94s structures', () => {
     for (const c of [...k.ae!, ...k.ee!]) expect(c.jHz).toBeGreaterThan(1.5), expect(c.jHz).toBeLessThan(5);
   });
 
-  it('vicinalCoupling of β-D-glucopyranose H1–H2 is near 8 Hz ±1.5 (typical observed value, METHODS.md §6.3, from memory)', () => {
+  it('vicinalCoupling of β-D-glucopyranose H1–H2 is near 8 Hz ±1.5 (typical observed value, docs/methods.md#observed-couplings, from memory)', () => {
     // PubChem-style isomeric SMILES of β-D-glucopyranose; atoms: 0 C6, 1 C5, 2 C4, 3 C3, 4 C2, 5 C1, 6 O5, 7 O1…
     const m = mmffConformer('C([C@@H]1[C@H]([C@@H]([C@H]([C@@H](O1)O)O)O)O)O');
     const g = graphOf(m);
@@ -148,7 +148,7 @@ describe('vicinalCoupling skips what it does not model', () => {
 });
 
 describe('toCouplingJson', () => {
-  it('toCouplingJson reports 1-based atoms and the DESIGN.md fields only', () => {
+  it('toCouplingJson reports 1-based atoms and the README fields only', () => {
     const chair = cyclohexaneChair();
     const r = vicinalCoupling(chair, graphOf(chair), 6, 0, 1, 8) as Coupling;
     const json = toCouplingJson(r);

@@ -23,12 +23,12 @@ const CA: Vec3 = [0, 0, 0];
 const CB: Vec3 = [0, 0, 1.54];
 
 describe('haasnootJ', () => {
-  it("haasnootJ(φ, [], 'a') gives 13.05, 3.06, 0.00, 3.87, 14.67 Hz at 0, 60, 90, 120, 180° (Haasnoot, de Leeuw & Altona 1980, Tetrahedron 36, 2783; derived, METHODS.md §6.2)", () => {
+  it("haasnootJ(φ, [], 'a') gives 13.05, 3.06, 0.00, 3.87, 14.67 Hz at 0, 60, 90, 120, 180° (Haasnoot, de Leeuw & Altona 1980, Tetrahedron 36, 2783; derived, docs/methods.md#haasnoot)", () => {
     const j = [0, 60, 90, 120, 180].map((t) => haasnootJ(t, [], 'a'));
     [13.05, 3.06, 0.0, 3.87, 14.67].forEach((v, i) => expect(j[i]).toBeCloseTo(v, 2));
   });
 
-  it('haasnootJ with one O: anti to H_b gives 1.85 Hz, gauche to both 3.75 Hz, ξ from real 3D vectors (METHODS.md §6.2, derived)', () => {
+  it('haasnootJ with one O: anti to H_b gives 1.85 Hz, gauche to both 3.75 Hz, ξ from real 3D vectors (docs/methods.md#haasnoot, derived)', () => {
     // Front carbon CA carries H_a (azimuth 0), O (120) and H (240); the back H_b sits at 300 (O anti) or 60.
     const ha = arm(CA, 0, -1, 1.09);
     const o = arm(CA, 120, -1, 1.43);
@@ -46,7 +46,7 @@ describe('haasnootJ', () => {
     expect(cases[1]!.j).toBeCloseTo(3.75, 2);
   });
 
-  it('substituentOrientation equals sign(wrap180(φ_HH − φ_S)) (METHODS.md §6.2 equivalent form)', () => {
+  it('substituentOrientation equals sign(wrap180(φ_HH − φ_S)) (docs/methods.md#haasnoot equivalent form)', () => {
     fc.assert(
       fc.property(
         fc.double({ min: 10, max: 170, noNaN: true }),
@@ -85,21 +85,21 @@ describe('haasnootJ', () => {
 });
 
 describe('haasnootSetFor', () => {
-  it('haasnootSetFor maps 2/3/4 substituents to sets C/D/E (from memory, METHODS.md §6.2) and 0–1 to B (our choice)', () => {
+  it('haasnootSetFor maps 2/3/4 substituents to sets C/D/E (from memory, docs/methods.md#haasnoot) and 0–1 to B (our choice)', () => {
     expect([0, 1, 2, 3, 4, 5].map(haasnootSetFor)).toEqual(['b', 'b', 'c', 'd', 'e', 'e']);
     expect(HAASNOOT_SETS.get('a')!.p7).toBe(0);
   });
 });
 
 describe('hugginsElectronegativity', () => {
-  it('hugginsElectronegativity gives Huggins 1953 values (J. Am. Chem. Soc. 75, 4123; from memory / parameter listing)', () => {
+  it('hugginsElectronegativity gives Huggins 1953 values (J. Am. Chem. Soc. 75, 4123; from memory)', () => {
     expect(['H', 'C', 'N', 'O', 'Cl', 'Br', 'I', 'S', 'Si'].map((e) => hugginsElectronegativity(e))).toEqual([
       2.2, 2.6, 3.05, 3.5, 3.15, 2.95, 2.65, 2.6, 1.9,
     ]);
     expect(hugginsElectronegativity('Xe')).toBeUndefined();
   });
 
-  it('hugginsElectronegativity of F is unsettled: 4.00 by default (parameter listing), 3.90 on request (from memory) — FLAGGED', () => {
+  it('hugginsElectronegativity of F is unsettled: 4.00 by default, 3.90 on request (both from memory) — FLAGGED', () => {
     expect(hugginsElectronegativity('F')).toBe(4.0);
     expect(hugginsElectronegativity('F', FLUORINE_CHI_ALTERNATIVE)).toBe(3.9);
   });

@@ -3,7 +3,7 @@ import fc from 'fast-check';
 import { KARPLUS_FORMS, karplusJ } from '../../src/analysis/karplus.js';
 
 describe('karplusJ', () => {
-  it("karplusJ(φ, 'karplus-1959') gives 1.845 Hz at 60° and 9.22 Hz at 180° (Karplus 1959, J. Chem. Phys. 30, 11; values derived, METHODS.md §6.1)", () => {
+  it("karplusJ(φ, 'karplus-1959') gives 1.845 Hz at 60° and 9.22 Hz at 180° (Karplus 1959, J. Chem. Phys. 30, 11; values derived, docs/methods.md#karplus)", () => {
     expect(karplusJ(60, 'karplus-1959')).toBeCloseTo(1.845, 3);
     expect(karplusJ(180, 'karplus-1959')).toBeCloseTo(9.22, 3);
     expect(karplusJ(-180, 'karplus-1959')).toBeCloseTo(9.22, 3);

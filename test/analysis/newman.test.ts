@@ -13,27 +13,27 @@ const view = (m: Molecule, f: number, b: number, o = {}) => newmanView(m, graphO
 const sorted = (xs: (number | null)[]) => xs.map((x) => Math.round(x!)).sort((a, b) => a - b);
 
 describe('newmanView', () => {
-  it('newmanView of ideal staggered ethane gives ±60/180 and staggered (METHODS.md §1.3, IUCr teaching pamphlet 15)', () => {
+  it('newmanView of ideal staggered ethane gives ±60/180 and staggered (docs/methods.md#staggered-eclipsed, IUCr teaching pamphlet 15)', () => {
     const v = view(ethane(60), 0, 1);
     expect(sorted(v.pairs.map((p) => p.torsionDeg))).toEqual([-60, -60, -60, 60, 60, 60, 180, 180, 180]);
     expect(v.conformation).toBe('staggered');
     expect(v.minOffsetDeg).toBeCloseTo(60, 6);
   });
 
-  it('newmanView of ideal eclipsed ethane gives 0/±120 and eclipsed (METHODS.md §1.3)', () => {
+  it('newmanView of ideal eclipsed ethane gives 0/±120 and eclipsed (docs/methods.md#staggered-eclipsed)', () => {
     const v = view(ethane(0), 0, 1);
     expect(sorted(v.pairs.map((p) => p.torsionDeg)).map((x) => x + 0)).toEqual([-120, -120, -120, 0, 0, 0, 120, 120, 120]);
     expect(v.conformation).toBe('eclipsed');
     expect(v.minOffsetDeg!).toBeCloseTo(0, 6);
   });
 
-  it('newmanView classifies a 30° offset as intermediate (METHODS.md §1.3 thresholds, common practice, no source)', () => {
+  it('newmanView classifies a 30° offset as intermediate (docs/methods.md#staggered-eclipsed thresholds, common practice, no source)', () => {
     expect(view(ethane(30), 0, 1).conformation).toBe('intermediate');
     expect(view(ethane(14), 0, 1).conformation).toBe('eclipsed');
     expect(view(ethane(46), 0, 1).conformation).toBe('staggered');
   });
 
-  it('newmanView of anti butane C2–C3 gives C1/C4 ≈ 180, ap, anti (METHODS.md §1.2, §8)', () => {
+  it('newmanView of anti butane C2–C3 gives C1/C4 ≈ 180, ap, anti (docs/methods.md#klyne-prelog, docs/methods.md#reference-geometries)', () => {
     const v = view(butane(180), 1, 2);
     const p = v.pairs.find((q) => q.front === 0 && q.back === 3)!;
     expect(p.torsionDeg).toBeCloseTo(180, 6);
@@ -42,7 +42,7 @@ describe('newmanView', () => {
     expect(v.conformation).toBe('staggered');
   });
 
-  it('newmanView of gauche butane gives ±65, ±sc, gauche (METHODS.md §1.2; 65° from memory, §8)', () => {
+  it('newmanView of gauche butane gives ±65, ±sc, gauche (docs/methods.md#klyne-prelog; 65° from memory, docs/methods.md#reference-geometries)', () => {
     for (const t of [65, -65]) {
       const p = view(butane(t), 1, 2).pairs.find((q) => q.front === 0 && q.back === 3)!;
       expect(p.torsionDeg).toBeCloseTo(t, 6);
@@ -51,7 +51,7 @@ describe('newmanView', () => {
     }
   });
 
-  it('newmanView torsions equal torsion(X, front, back, Y) for every pair (METHODS.md §10.1, derived)', () => {
+  it('newmanView torsions equal torsion(X, front, back, Y) for every pair (docs/methods.md#newman-projection, derived)', () => {
     const m = butane(-100);
     const v = view(m, 2, 1);
     for (const p of v.pairs) {
@@ -60,7 +60,7 @@ describe('newmanView', () => {
     }
   });
 
-  it('newmanView on a chair ring bond puts the ring neighbour up and gives −54.94 (METHODS.md §10.1, derived)', () => {
+  it('newmanView on a chair ring bond puts the ring neighbour up and gives −54.94 (docs/methods.md#newman-projection, derived)', () => {
     const { mol, ring } = cyclohexaneChair();
     const v = view(mol, 1, 2, { rings: [ring] });
     expect(v.up).toBe(0);
@@ -69,7 +69,7 @@ describe('newmanView', () => {
     expect(v.backSubstituents.filter((s) => s.inRing).map((s) => s.atom)).toEqual([3]);
     const ringPair = v.pairs.find((p) => p.front === 0 && p.back === 3)!;
     expect(Math.abs(ringPair.torsionDeg!)).toBeCloseTo(54.94, 1);
-    // true front gaps 121.2 / 117.6 / 121.2 in this model (METHODS.md §10.1, derived)
+    // true front gaps 121.2 / 117.6 / 121.2 in this model (docs/methods.md#newman-projection, derived)
     const az = v.frontSubstituents.map((s) => s.azimuthDeg!).sort((a, b) => a - b);
     const gaps = [az[1]! - az[0]!, az[2]! - az[1]!, 360 - az[2]! + az[0]!].map((g) => Math.round(g * 10) / 10).sort();
     expect(gaps).toEqual([117.6, 121.2, 121.2]);
@@ -124,7 +124,7 @@ describe('newmanView', () => {
 });
 
 describe('toNewmanJson', () => {
-  it('toNewmanJson emits schema conformark/newman@1 with 1-based atoms and the DESIGN.md fields', () => {
+  it('toNewmanJson emits schema conformark/newman@1 with 1-based atoms and the README fields', () => {
     const m = butane(65);
     const j = toNewmanJson(view(m, 1, 2), m);
     expect(Object.keys(j)).toEqual(['schema', 'record', 'front', 'back', 'frontSubstituents', 'backSubstituents', 'pairs', 'conformation', 'minOffsetDeg', 'couplings']);

@@ -3,11 +3,11 @@ import { analyzeRing } from '../../src/analysis/ringAnalysis.js';
 import { SIX_RING_FORMS, FIVE_RING_FORMS, THETA_ENVELOPE, THETA_HALF_CHAIR, THETA_SCREW_BOAT } from '../../src/analysis/ringForms.js';
 import { fiveRingAt, ringMolecule, sixRingAt } from '../helpers/ringBuilders.js';
 
-// METHODS.md §3.3 table (pyranose order O5, C1…C5; derived), written out as plain text.
+// docs/methods.md#six-ring-forms table (pyranose order O5, C1…C5; derived), written out as plain text.
 const NORTH = 'OE OH1 E1 2H1 2E 2H3 E3 4H3 4E 4H5 E5 OH5'.split(' ');
 const EQUATOR = '3,OB 3S1 B1,4 5S1 2,5B 2SO B3,O 1S3 1,4B 1S5 B2,5 OS2'.split(' ');
 const SOUTH = '3E 3H4 E4 5H4 5E 5HO EO 1HO 1E 1H2 E2 3H2'.split(' ');
-// METHODS.md §4.1 furanose table (O4′, C1′…C4′; derived), φ2 = 0, 18, … 342.
+// docs/methods.md#five-ring-forms furanose table (O4′, C1′…C4′; derived), φ2 = 0, 18, … 342.
 const FIVE = 'OE OT1 E1 2T1 2E 2T3 E3 4T3 4E 4TO EO 1TO 1E 1T2 E2 3T2 3E 3T4 E4 OT4'.split(' ');
 
 const pyranose = (points: ReturnType<typeof sixRingAt>) =>
@@ -15,7 +15,7 @@ const pyranose = (points: ReturnType<typeof sixRingAt>) =>
 const shapeOf = (letter: string) =>
   ({ C: 'chair', B: 'boat', S: 'twist-boat', H: 'half-chair', E: 'envelope', T: 'twist' })[letter.replace(/[^A-Z]|O/g, '')[0]!];
 
-describe('canonical six-ring forms (METHODS.md §3.3, derived)', () => {
+describe('canonical six-ring forms (docs/methods.md#six-ring-forms, derived)', () => {
   const cases: [string, number, number][] = [
     ['4C1', 0, 0],
     ['1C4', 180, 0],
@@ -68,7 +68,7 @@ describe('canonical six-ring forms (METHODS.md §3.3, derived)', () => {
   });
 });
 
-describe('canonical five-ring forms (METHODS.md §4.1, derived)', () => {
+describe('canonical five-ring forms (docs/methods.md#five-ring-forms, derived)', () => {
   it('FIVE_RING_FORMS has 10 envelopes and 10 twists', () => {
     expect(FIVE_RING_FORMS.filter((f) => f.shape === 'envelope')).toHaveLength(10);
     expect(FIVE_RING_FORMS.filter((f) => f.shape === 'twist')).toHaveLength(10);
@@ -79,7 +79,7 @@ describe('canonical five-ring forms (METHODS.md §4.1, derived)', () => {
     const r = analyzeRing(mol, graph, ring);
     expect(r.descriptor).toBe(name);
     expect(r.shape).toBe(name.includes('T') ? 'twist' : 'envelope');
-    // P ≈ φ2 + 90 for ideal rings (METHODS.md §4.1, derived; within ±0.6° there, ±1° here)
+    // P ≈ φ2 + 90 for ideal rings (docs/methods.md#five-ring-forms, derived; within ±0.6° there, ±1° here)
     const p = r.pseudorotation!.phaseDeg;
     expect(Math.abs(((p - phi - 90 + 540) % 360) - 180)).toBeLessThan(1);
   });

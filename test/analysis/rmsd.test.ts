@@ -76,7 +76,7 @@ describe('findDuplicates', () => {
 });
 
 describe('torsionFingerprint', () => {
-  it('torsionFingerprint gives the ring torsions ±54.9 of the chair model (derived, METHODS.md §2.4)', () => {
+  it('torsionFingerprint gives the ring torsions ±54.9 of the chair model (derived, docs/methods.md#cremer-pople-checks)', () => {
     const fp = torsionFingerprint(cyclohexaneChair(), [[0, 1, 2, 3], [1, 2, 3, 4]]);
     expect(Math.abs(fp[0]!)).toBeCloseTo(54.94, 1);
     expect(fp[0]! * fp[1]!).toBeLessThan(0);

@@ -36,7 +36,7 @@ describe('ShapeTable', () => {
     );
   });
 
-  it('classify names the pyranose chairs 4C1 and 1C4 (METHODS.md §3.3, derived)', () => {
+  it('classify names the pyranose chairs 4C1 and 1C4 (docs/methods.md#six-ring-forms, derived)', () => {
     const table = new ShapeTable(SIX);
     expect(table.descriptorOf(table.classify(0.57, 0.01, 2, 0))).toBe('4C1');
     expect(table.descriptorOf(table.classify(0.57, 0.01, 178, 0))).toBe('1C4');

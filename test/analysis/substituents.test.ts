@@ -5,7 +5,7 @@ import { THETA_HALF_CHAIR } from '../../src/analysis/ringForms.js';
 import { c2vBoat, d2TwistBoat, d3dChair, renumberToPhi, ringMolecule, sixRingAt } from '../helpers/ringBuilders.js';
 import type { Vec3 } from '../../src/model/molecule.js';
 
-/** Ring with two H per atom (C–H 1.10, H–C–H 107.5, bisector plane: the METHODS.md §5 model), analysed. */
+/** Ring with two H per atom (C–H 1.10, H–C–H 107.5, bisector plane: the docs/methods.md#axial-equatorial model), analysed. */
 const analyse = (points: Vec3[]) => {
   const { mol, graph, ring } = ringMolecule(points, { hydrogens: true });
   return analyzeRing(mol, graph, ring);
@@ -13,7 +13,7 @@ const analyse = (points: Vec3[]) => {
 const byRingAtom = (r: ReturnType<typeof analyse>, j: number) =>
   r.substituents.filter((s) => s.ringAtom === r.atoms[j]).sort((a, b) => a.angleToNormalDeg - b.angleToNormalDeg);
 
-describe('ringSubstituents on the METHODS.md §5 models (derived)', () => {
+describe('ringSubstituents on the docs/methods.md#axial-equatorial models (derived)', () => {
   it('a GED-like chair has axial H at α 4.1 and equatorial H at α 68.4, axial faces alternating with z', () => {
     const r = analyse(d3dChair(1.536, 111.4).points);
     expect(r.shape).toBe('chair');

@@ -39,7 +39,7 @@ function sixRing(mol: Molecule, start: number): number[] {
   return walk([start])!;
 }
 
-/** Angle (deg, folded to 0–90) between bond ring atom → substituent and the Cremer–Pople normal (METHODS §5). */
+/** Angle (deg, folded to 0–90) between bond ring atom → substituent and the Cremer–Pople normal (docs/methods.md#axial-equatorial). */
 function angleToNormal(mol: Molecule, ring: number[], ringAtom: number, substituent: number): number {
   const p = cremerPople(ring.map((i) => atomPosition(mol, i)))!;
   const bond = sub(atomPosition(mol, substituent), atomPosition(mol, ringAtom));
@@ -66,7 +66,7 @@ describe('buildConformers', () => {
   });
 
   it('buildConformers(cyclohexane, ringForms) gives one chair and one twist-boat, ΔE 4–7.5 kcal/mol', () => {
-    // ≈ 5.5 kcal/mol commonly quoted (METHODS.md §8; Squillacote et al. 1975 attribution from memory)
+    // ≈ 5.5 kcal/mol commonly quoted (docs/methods.md#reference-geometries; Squillacote et al. 1975 attribution from memory)
     expect(shapes(cyclohexane)).toEqual(['chair', 'twist-boat']);
     const [chair, twist] = cyclohexane.molecules;
     expect(chair!.atoms).toHaveLength(18); // hydrogens explicit
@@ -77,14 +77,14 @@ describe('buildConformers', () => {
   });
 
   it('buildConformers(methylcyclohexane, ringForms) gives both chairs, axial methyl 0.8–2.5 kcal/mol higher', () => {
-    // A-value of CH3 1.7 kcal/mol (Eliel & Wilen 1994, METHODS.md §8); range allows for the force field
+    // A-value of CH3 1.7 kcal/mol (Eliel & Wilen 1994, docs/methods.md#reference-geometries); range allows for the force field
     const chairs = methyl.molecules.filter((m) => m.properties['six-ring shapes'] === 'chair');
     expect(chairs).toHaveLength(2);
     const [low, high] = chairs as [Molecule, Molecule];
     const methylC = 0; // first atom of the SMILES
     const ringAtom = 1;
     const ring = sixRing(low, ringAtom);
-    // axial ≤ 35°, equatorial ≥ 55° to the normal (METHODS.md §5, common practice, no source)
+    // axial ≤ 35°, equatorial ≥ 55° to the normal (docs/methods.md#axial-equatorial, common practice, no source)
     expect(angleToNormal(low, ring, ringAtom, methylC)).toBeGreaterThanOrEqual(55);
     expect(angleToNormal(high, sixRing(high, ringAtom), ringAtom, methylC)).toBeLessThanOrEqual(35);
     const dE = energy(high) - energy(low);
@@ -116,14 +116,14 @@ describe('buildConformers', () => {
     expect(shapes({ molecules, notes: [] })).toContain('twist-boat');
     const m = molecules[0]!;
     const nb = neighbours(m);
-    // pyranose order O5, C1, C2, C3, C4, C5 (METHODS.md §2.2): O5 is atom 4 (index 3), C1 the anomeric carbon
+    // pyranose order O5, C1, C2, C3, C4, C5 (docs/methods.md#ring-orientation): O5 is atom 4 (index 3), C1 the anomeric carbon
     const o5 = 3;
     const c1 = nb[o5]!.find((k) => nb[k]!.some((x) => x !== o5 && m.atoms[x]!.element === 'O'))!;
     expect(c1).toBe(4);
     const ring = sixRing(m, o5);
     const ordered = ring[1] === c1 ? ring : [o5, ...ring.slice(1).reverse()];
     const p = cremerPople(ordered.map((i) => atomPosition(m, i)))!;
-    expect(p.thetaDeg!).toBeLessThan(15); // 4C1 at θ ≈ 0 (METHODS.md §3.3, derived)
+    expect(p.thetaDeg!).toBeLessThan(15); // 4C1 at θ ≈ 0 (docs/methods.md#six-ring-forms, derived)
     const substituents = heavySubstituents(m, ring);
     expect(substituents).toHaveLength(5);
     for (const [r, s] of substituents) expect(angleToNormal(m, ring, r, s)).toBeGreaterThanOrEqual(55);

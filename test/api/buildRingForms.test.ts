@@ -15,7 +15,7 @@ const ring = [0, 1, 2, 3, 4, 5];
 const at = (c: Float64Array, i: number): Vec3 => [c[3 * i]!, c[3 * i + 1]!, c[3 * i + 2]!];
 
 describe('reshapeRing', () => {
-  it('reshapeRing puts the ring at each target (θ, φ) of ringTargets (derived: METHODS.md §2.1 inverse)', () => {
+  it('reshapeRing puts the ring at each target (θ, φ) of ringTargets (derived: docs/methods.md#cremer-pople inverse)', () => {
     const coords = ringWithSubstituent(0, 0, [0, 0, 1.1]);
     for (const target of ringTargets({ Q: 0.56, thetaDeg: 0, phiDeg: null })) {
       const p = cremerPople(ring.map((i) => at(reshapeRing(coords, ring, neighbors, target)!, i)))!;
@@ -31,13 +31,13 @@ describe('reshapeRing', () => {
     const bond = (c: Float64Array) => at(c, 6).map((v, d) => v - at(c, 0)[d]!) as unknown as Vec3;
     expect(Math.hypot(...bond(flipped))).toBeCloseTo(1.1, 9);
     expect(bond(flipped)[2]).toBeGreaterThan(0); // same (top) face
-    // atom 0 is now a down atom: an upward bond there is equatorial, far from the normal (METHODS.md §5)
+    // atom 0 is now a down atom: an upward bond there is equatorial, far from the normal (docs/methods.md#axial-equatorial)
     expect(angleBetween(bond(flipped), [0, 0, 1]) * DEG).toBeGreaterThan(55);
   });
 });
 
 describe('sixRingShape', () => {
-  it('sixRingShape names ideal chairs, boats, twist-boats and half-chairs (METHODS.md §3.3, derived)', () => {
+  it('sixRingShape names ideal chairs, boats, twist-boats and half-chairs (docs/methods.md#six-ring-forms, derived)', () => {
     const shape = (t: number, p: number) => sixRingShape(ringWithSubstituent(t, p, [0, 0, 1]), ring).shape;
     expect([shape(0, 0), shape(180, 0), shape(90, 0), shape(90, 30), shape(90, 240), shape(45, 30)]).toEqual([
       'chair', 'chair', 'boat', 'twist-boat', 'boat', 'half-chair',

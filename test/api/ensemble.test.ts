@@ -35,7 +35,7 @@ beforeAll(async () => {
 }, 120_000);
 
 describe('ensembleFile', () => {
-  it('ensembleFile gives butane x_gauche = 0.3963 at ΔE 0.66 kcal/mol with g = 2 from a degeneracy field (derived, METHODS.md §9)', async () => {
+  it('ensembleFile gives butane x_gauche = 0.3963 at ΔE 0.66 kcal/mol with g = 2 from a degeneracy field (derived, docs/methods.md#boltzmann)', async () => {
     const path = join(temp(), 'butane.sdf');
     const anti = withProperties(butane(180), { 'energy (kcal/mol)': '-3.20', g: '1' }, 'anti');
     const gauche = withProperties(butane(65), { 'energy (kcal/mol)': '-2.54', g: '2' }, 'gauche');
@@ -52,7 +52,7 @@ describe('ensembleFile', () => {
     expect(report.notes.join(' ')).toMatch(/degeneracies from field 'g'/);
   });
 
-  it('ensembleFile gives methylcyclohexane x_eq = 0.9496 at A = 1.74 kcal/mol, also from energies given in kJ/mol (derived, METHODS.md §9)', async () => {
+  it('ensembleFile gives methylcyclohexane x_eq = 0.9496 at A = 1.74 kcal/mol, also from energies given in kJ/mol (derived, docs/methods.md#boltzmann)', async () => {
     const eq = withProperties(chairs[0]!, { energy_kcal: '0' });
     const ax = withProperties(chairs[1]!, { energy_kcal: '1.74' });
     const { report } = ensembleOf([at(ax, 1), at(eq, 2)]);
@@ -78,7 +78,7 @@ describe('ensembleFile', () => {
     expect(ensembleText(report)).toMatch(/dup of r01/);
   });
 
-  it('ensembleOf averages J over conformers with their populations (⟨J⟩ = Σ p_i J_i, METHODS.md §9)', () => {
+  it('ensembleOf averages J over conformers with their populations (⟨J⟩ = Σ p_i J_i, docs/methods.md#boltzmann)', () => {
     const eq = at(withProperties(chairs[0]!, { 'energy (kcal/mol)': '0' }), 1);
     const ax = at(withProperties(chairs[1]!, { 'energy (kcal/mol)': '1.74' }), 2);
     const { report } = ensembleOf([eq, ax]);

@@ -9,14 +9,14 @@ import { formatXyz } from '../../src/io/formatXyz.js';
 const GLUCOSIDE = 'examples/w3-methyl-glucoside.sdf';
 
 describe('inspectFile', () => {
-  it('inspectFile reports every record with the DESIGN.md field names', async () => {
+  it('inspectFile reports every record with the README field names', async () => {
     const report = await inspectFile(GLUCOSIDE);
     expect(report.schema).toBe('conformark/report@1');
     expect(report.source).toEqual({ path: GLUCOSIDE, format: 'sdf' });
     expect(report.records.length).toBe(4);
     const r = report.records[0]!;
     expect(Object.keys(r).slice(0, 6)).toEqual(['index', 'title', 'energy', 'atoms', 'bonds', 'rings']);
-    expect(Object.keys(r.atoms[0]!)).toEqual(['id', 'element', 'name', 'xyz']);
+    expect(Object.keys(r.atoms[0]!)).toEqual(['id', 'element', 'name', 'residue', 'serial', 'xyz']);
     expect(Object.keys(r.bonds[0]!)).toEqual(['atoms', 'order', 'perceived']);
     expect(Object.keys(r.rings[0]!).slice(0, 8)).toEqual([
       'id', 'atoms', 'size', 'puckering', 'shape', 'descriptor', 'torsions', 'substituents',
@@ -28,7 +28,7 @@ describe('inspectFile', () => {
     const ring = (await inspectFile(GLUCOSIDE)).records[0]!.rings[0]!;
     expect(ring.shape).toBe('chair');
     expect(ring.descriptor).toBe('4C1');
-    // pyranose order O5, C1 … C5: the ring oxygen is first (METHODS.md §2.2)
+    // pyranose order O5, C1 … C5: the ring oxygen is first (docs/methods.md#ring-orientation)
     expect(ring.locants[0]).toBe('O');
     const heavy = ring.substituents.filter((s) => s.element !== 'H');
     expect(heavy.length).toBe(5);
@@ -37,7 +37,7 @@ describe('inspectFile', () => {
     for (const s of hydrogens) expect(s.position).toBe('axial');
   });
 
-  it('inspectFile with couplings predicts H1–H2 of a β-glucoside near 8 Hz (METHODS.md §6.3, from memory; ±1.5 Hz)', async () => {
+  it('inspectFile with couplings predicts H1–H2 of a β-glucoside near 8 Hz (docs/methods.md#observed-couplings, from memory; ±1.5 Hz)', async () => {
     const r = (await inspectFile(GLUCOSIDE, { couplings: true })).records[0]!;
     const ring = r.rings[0]!;
     const [c1, c2] = [ring.atoms[1]!, ring.atoms[2]!];

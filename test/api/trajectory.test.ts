@@ -106,7 +106,7 @@ describe('analyzeTrajectory', () => {
     expect(head).toBe('frame,time_ns,Q,thetaDeg,phiDeg,shape,descriptor,torsion_2_3_4_5,torsion_6_1_2_3');
   });
 
-  it('analyzeTrajectory(five-ring walk) gives P ≈ φ2 + 90 and the envelope/twist shapes (METHODS.md §4.1, derived)', async () => {
+  it('analyzeTrajectory(five-ring walk) gives P ≈ φ2 + 90 and the envelope/twist shapes (docs/methods.md#five-ring-forms, derived)', async () => {
     const out = join(dir, 'f');
     const s = await analyzeTrajectory(join(dir, 'five.xyz'), { dir: out });
     const rows = csvRows(join(out, 'puckering.csv'));

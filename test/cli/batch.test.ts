@@ -80,7 +80,7 @@ describe('conformark ensemble', () => {
     const report = JSON.parse(r.stdout);
     expect(report.schema).toBe('conformark/ensemble@1');
     expect(report.temperatureK).toBe(298.15);
-    expect(report.conformers[1].population).toBeCloseTo(0.3963, 4); // derived, METHODS.md §9
+    expect(report.conformers[1].population).toBeCloseTo(0.3963, 4); // derived, docs/methods.md#boltzmann
     expect(report.notes.some((n: string) => /not free energies/.test(n))).toBe(true);
     expect(readdirSync(dir).sort()).toEqual(['energy-ladder.svg', 'ensemble-sheet-1.svg']);
     const text = run('ensemble', input, '--degeneracy-field', 'g', '--temperature', '500');

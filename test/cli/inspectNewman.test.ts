@@ -51,7 +51,7 @@ describe('conformark newman', () => {
     expect(doc.schema).toBe('conformark/newman@1');
     expect(doc.couplings).toHaveLength(1);
     expect(doc.couplings[0].method).toBe('haasnoot-1980');
-    // trans-diaxial H–C–C–H in a 4C1 chair: a large coupling (METHODS.md §6.3, from memory: 7.5–10 Hz in pyranoses)
+    // trans-diaxial H–C–C–H in a 4C1 chair: a large coupling (docs/methods.md#observed-couplings, from memory: 7.5–10 Hz in pyranoses)
     expect(Math.abs(doc.couplings[0].torsionDeg)).toBeGreaterThan(160);
     expect(doc.couplings[0].jHz).toBeGreaterThan(7.5);
   });

@@ -6,12 +6,12 @@ import { buildProgram } from '../../src/cli/main.js';
 const run = (...args: string[]) => spawnSync('node', ['bin/conformark.js', ...args], { encoding: 'utf8' });
 
 describe('buildProgram', () => {
-  it('buildProgram registers every command of DESIGN.md', () => {
+  it('buildProgram registers every command the README documents', () => {
     const names = buildProgram().commands.map((c) => c.name()).sort();
     expect(names).toEqual(['batch', 'build', 'chair', 'demo', 'ensemble', 'inspect', 'newman', 'trajectory']);
   });
 
-  it('buildProgram gives each command the options DESIGN.md names', () => {
+  it('buildProgram gives each command the options the README names', () => {
     const options = (name: string) =>
       buildProgram().commands.find((c) => c.name() === name)!.options.map((o) => o.long);
     expect(options('inspect')).toEqual(expect.arrayContaining(['--json', '--couplings']));

@@ -83,4 +83,17 @@ describe('conformark trajectory', () => {
     const fmt = run('trajectory', join(dir, 'walk.sdf'), '--formats', 'gif', '-d', join(dir, 'b4'));
     expect(fmt.stderr).toMatch(/--formats expects one of svg, png, pdf/);
   });
+
+  it('trajectory FILE.dcd --topology PDB reads the DCD with its cell; without --topology it exits 2 with one line', () => {
+    const fix = join('test', 'fixtures', 'md');
+    const ok = run('trajectory', join(fix, 'ring.dcd'), '--topology', join(fix, 'ring.pdb'), '-d', join(dir, 'dcd'));
+    expect(ok.status).toBe(0);
+    expect(ok.stdout).toMatch(/^5 frames analysed \(1-2-3-4-5-6\): chair 100\.0%/);
+    const noTop = run('trajectory', join(fix, 'ring.dcd'), '-d', join(dir, 'dcd2'));
+    expect(noTop.status).toBe(2);
+    expect(noTop.stderr).toMatch(/^conformark: .*holds coordinates only: give the atoms with --topology FILE/);
+    const badBox = run('trajectory', join(fix, 'ring.dcd'), '--topology', join(fix, 'ring.pdb'), '--box', '0 1 1', '-d', join(dir, 'dcd3'));
+    expect(badBox.status).toBe(2);
+    expect(badBox.stderr.split('\n').length).toBe(2);
+  });
 });

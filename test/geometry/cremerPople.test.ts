@@ -37,7 +37,7 @@ const distortedRing = (n: number) =>
       return ring.map((p, j) => [p[0] + jitter[3 * j]!, p[1] + jitter[3 * j + 1]!, p[2] + jitter[3 * j + 2]!] as Vec3);
     });
 
-describe('cremerPople check geometries (METHODS.md §2.4, derived)', () => {
+describe('cremerPople check geometries (docs/methods.md#cremer-pople-checks, derived)', () => {
   it('cremerPople of the GED-like D3d chair (C–C 1.536, C–C–C 111.4) gives h 0.2305, ω 54.94, Q 0.5646, θ 0', () => {
     const { points, h } = d3dChair(1.536, 111.4);
     const cp = cremerPople(points)!;
@@ -86,11 +86,11 @@ describe('cremerPople check geometries (METHODS.md §2.4, derived)', () => {
     const cp = cremerPople(flat)!;
     expect(cp.Q).toBeLessThan(1e-12);
     expect(cp.phiDeg).toBeNull();
-    expect(cp.normal[2]).toBeCloseTo(1, 12); // numbered clockwise from +z → n = +z (§2.2)
+    expect(cp.normal[2]).toBeCloseTo(1, 12); // numbered clockwise from +z → n = +z (docs/methods.md#ring-orientation)
   });
 });
 
-describe('cremerPople invariants (METHODS.md §2.2 table, derived)', () => {
+describe('cremerPople invariants (docs/methods.md#ring-orientation table, derived)', () => {
   const run = { seed: 424242, numRuns: 200 };
 
   it('displacementsFromModes inverts cremerPople exactly', () => {
@@ -106,7 +106,7 @@ describe('cremerPople invariants (METHODS.md §2.2 table, derived)', () => {
     );
   });
 
-  it('cremerPople of a renumbered six-ring moves (θ, φ) as the §2.2 table says', () => {
+  it('cremerPople of a renumbered six-ring moves (θ, φ) as the renumbering table says (docs/methods.md#ring-orientation)', () => {
     fc.assert(
       fc.property(distortedRing(6), (r) => {
         const cp = cremerPople(r)!;
@@ -132,7 +132,7 @@ describe('cremerPople invariants (METHODS.md §2.2 table, derived)', () => {
     );
   });
 
-  it('cremerPople of a renumbered five-ring moves φ2 as the §2.2 table says', () => {
+  it('cremerPople of a renumbered five-ring moves φ2 as the renumbering table says (docs/methods.md#ring-orientation)', () => {
     fc.assert(
       fc.property(distortedRing(5), (r) => {
         const p = cremerPople(r)!.phiDeg!;

@@ -16,7 +16,7 @@ const coord = fc.double({ min: -5, max: 5, noNaN: true });
 const point = fc.tuple(coord, coord, coord) as fc.Arbitrary<Vec3>;
 
 describe('torsion', () => {
-  it('torsion(A, B, C, D) gives +90 on the IUPAC sign example (METHODS.md §1.1, derived)', () => {
+  it('torsion(A, B, C, D) gives +90 on the IUPAC sign example (docs/methods.md#torsion, derived)', () => {
     expect(torsion([1, 0, 0], [0, 0, 0], [0, 0, 1], [0, 1, 1])).toBeCloseTo(90, 12);
   });
 

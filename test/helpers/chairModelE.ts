@@ -1,6 +1,6 @@
 /**
- * The cyclohexane chair model of METHODS.md §5 (C–C 1.536, C–C–C 111.4, C–H 1.10, H–C–H 107.5, H in the local
- * bisector plane), built from those numbers: derived geometry (METHODS.md §5, §8), not a published structure.
+ * The cyclohexane chair model of docs/methods.md#axial-equatorial (C–C 1.536, C–C–C 111.4, C–H 1.10, H–C–H 107.5, H in the local
+ * bisector plane), built from those numbers: derived geometry (docs/methods.md#axial-equatorial, docs/methods.md#reference-geometries), not a published structure.
  * Atoms: C1…C6 (0–5), then for carbon k its axial H (6 + 2k) and equatorial H (7 + 2k).
  */
 import type { Bond, Molecule, Vec3 } from '../../src/model/molecule.js';

@@ -62,9 +62,9 @@ export function butane(torsionDeg: number): Molecule {
 }
 
 /**
- * Cyclohexane chair (METHODS.md §8 diffraction model, Bastiansen et al. 1973, from memory): C–C 1.536 Å,
- * C–C–C 111.4°, ring torsions ±54.94 (derived, METHODS.md §2.4); C–H 1.10 Å, H–C–H 107.5° in the local
- * bisector plane (METHODS.md §5). Carbons 0–5, then two H per carbon (6 + 2k, 7 + 2k on carbon k).
+ * Cyclohexane chair (docs/methods.md#reference-geometries diffraction model, Bastiansen et al. 1973, from memory): C–C 1.536 Å,
+ * C–C–C 111.4°, ring torsions ±54.94 (derived, docs/methods.md#cremer-pople-checks); C–H 1.10 Å, H–C–H 107.5° in the local
+ * bisector plane (docs/methods.md#axial-equatorial). Carbons 0–5, then two H per carbon (6 + 2k, 7 + 2k on carbon k).
  */
 export function cyclohexaneChair(): { mol: Molecule; ring: number[] } {
   const t = 54.94;

@@ -1,5 +1,5 @@
 /**
- * Synthetic ring trajectories built with the inverse Cremer–Pople formula (METHODS.md §2.1 step 8): each frame
+ * Synthetic ring trajectories built with the inverse Cremer–Pople formula (docs/methods.md#cremer-pople, step 6): each frame
  * is an ideal ring at a chosen (Q, θ, φ) — or (q2, φ2) for five-rings — with hydrogens, a little Gaussian
  * noise and a random rigid motion. Seeded, so every run builds the same file.
  */

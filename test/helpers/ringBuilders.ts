@@ -1,5 +1,5 @@
 /**
- * Test helpers that build ring geometries from bond lengths and angles (METHODS.md §2.4, §5 models) and wrap
+ * Test helpers that build ring geometries from bond lengths and angles (docs/methods.md#cremer-pople-checks, docs/methods.md#axial-equatorial models) and wrap
  * them as Molecules.
  */
 import { cremerPople, displacementsFromModes, ringFromDisplacements, sixRingModes } from '../../src/geometry/cremerPople.js';
@@ -159,7 +159,7 @@ export function fiveRingAt(q2: number, phiDeg: number): Vec3[] {
 
 /**
  * Molecule of a ring (atoms in the given order, elements `elements[j]`, default all C) with, when `hydrogens`,
- * two H per ring atom in the local bisector plane (C–H `chLength` Å, H–C–H `hchDeg`), as in METHODS.md §5.
+ * two H per ring atom in the local bisector plane (C–H `chLength` Å, H–C–H `hchDeg`), as in docs/methods.md#axial-equatorial.
  */
 export function ringMolecule(
   points: readonly Vec3[],

@@ -42,7 +42,7 @@ const CASES: ReadonlyArray<readonly [string, ReadonlyArray<'ok' | readonly [stri
   ['bad-conect-text.pdb', [['bad-conect', 5, "expected atom serial numbers in CONECT, found 'two'"]]],
   ['bad-coords.pdb', [['bad-number', 3, "x coordinate 'x.957' is not a number (columns 31-38)"]]],
   ['unknown-element.pdb', [['unknown-element', 3, "unknown element 'XX' (columns 77-78)"]]],
-  ['overlap.pdb', [['overlapping-atoms', 3, 'atoms 1 (O) and 2 (H1) are 0.10 Å apart, closer than 0.4 Å']]],
+  ['overlap.pdb', [['overlapping-atoms', 3, 'atoms A/HOH1/O (atom 1) and A/HOH1/H1 (atom 2) are 0.10 Å apart inside one residue, closer than 0.4 Å']]],
 ];
 
 type Outcome = 'ok' | readonly [string, number | null, string];

@@ -32,13 +32,13 @@ const MODELS = [
 ].join('\n');
 
 describe('parseText (PDB)', () => {
-  it('parseText(pdb) reads names, residues, elements and CONECT bonds (deduplicated, order 1)', () => {
+  it('parseText(pdb) reads names, residues (number, chain, serial), elements and CONECT bonds (deduplicated, order 1)', () => {
     const [m] = parseText(WATER, { file: 'water.pdb' });
     expect(m!.title).toBe('WATER BY HAND');
     expect(m!.atoms).toEqual([
-      { element: 'O', name: 'O', residue: 'HOH', charge: 0 },
-      { element: 'H', name: 'H1', residue: 'HOH', charge: 0 },
-      { element: 'H', name: 'H2', residue: 'HOH', charge: 0 },
+      { element: 'O', name: 'O', residue: 'HOH', residueNumber: 1, insertionCode: '', chain: 'A', serial: 1, altLoc: '', charge: 0 },
+      { element: 'H', name: 'H1', residue: 'HOH', residueNumber: 1, insertionCode: '', chain: 'A', serial: 2, altLoc: '', charge: 0 },
+      { element: 'H', name: 'H2', residue: 'HOH', residueNumber: 1, insertionCode: '', chain: 'A', serial: 3, altLoc: '', charge: 0 },
     ]);
     expect(m!.bonds).toEqual([
       { a: 0, b: 1, order: 1, perceived: false },

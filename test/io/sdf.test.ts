@@ -47,7 +47,7 @@ describe('parseText (molfile / SDF)', () => {
         return `${Math.min(i, j)}-${Math.max(i, j)}`;
       }).sort();
       expect(m!.bonds!.map((b) => `${b.a}-${b.b}`).sort()).toEqual(oclBonds);
-      // openchemlib keeps y and z negated inside (LIBRARIES.md); x is the file's
+      // openchemlib keeps y and z negated inside (seen with openchemlib 9.25); x is the file's
       m!.atoms.forEach((_, i) => expect(m!.coords[3 * i]).toBeCloseTo(ocl.getAtomX(i), 4));
     }
   });

@@ -11,7 +11,7 @@ const lineAngle = (a: DrawnLine, b: DrawnLine) => {
   return Math.min(d, 180 - d);
 };
 
-// GED-like chair (METHODS.md §2.4, derived), two H per carbon in the local bisector plane (§5 model)
+// GED-like chair (docs/methods.md#cremer-pople-checks, derived), two H per carbon in the local bisector plane (the same model)
 const chair = ringMolecule(d3dChair(1.536, 111.4).points, { hydrogens: true });
 const fig = chairFigure(chair.mol, { rings: [chair.ring], hydrogens: 'all' });
 const lines = readLines(fig.svg);

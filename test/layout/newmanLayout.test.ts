@@ -40,7 +40,7 @@ describe('layoutNewman', () => {
     expect(JSON.parse(JSON.stringify(s))).toEqual(s);
   });
 
-  it('layoutNewman puts a +65° gauche back bond clockwise of the up bond (METHODS.md §10.1: mirrored y reverses signs)', () => {
+  it('layoutNewman puts a +65° gauche back bond clockwise of the up bond (docs/methods.md#newman-projection: mirrored y reverses signs)', () => {
     const s = scene(butane(65), 1, 2);
     const c1 = lines(s, 'front-bond').find((l) => l.atoms![1] === 0)!;
     const c4 = lines(s, 'back-bond').find((l) => l.atoms![1] === 3)!;

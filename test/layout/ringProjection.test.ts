@@ -9,8 +9,8 @@ import { readLines } from '../helpers/svgRead.js';
 
 const mirror = (mol: Molecule): Molecule => ({ ...mol, coords: mol.coords.map((v, i) => (i % 3 === 2 ? -v : v)) });
 
-describe('ringProjection (METHODS.md §10.2 view frame)', () => {
-  // derived (METHODS.md §10.2): GED-like chair C–C 1.536, C–C–C 111.4, h toward the C1–C2 midpoint, e = 20°
+describe('ringProjection (docs/methods.md#chair-drawing view frame)', () => {
+  // derived (docs/methods.md#chair-drawing): GED-like chair C–C 1.536, C–C–C 111.4, h toward the C1–C2 midpoint, e = 20°
   const { mol, graph, ring } = ringMolecule(d3dChair(1.536, 111.4).points);
   const analysis = analyzeRing(mol, graph, ring, { ordered: true });
   const p = ringProjection(analysis, mol);

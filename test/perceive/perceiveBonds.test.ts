@@ -10,7 +10,7 @@ const bonded = (a: string, b: string, d: number, toleranceA?: number) =>
   perceiveBonds(pair(a, b, d), toleranceA === undefined ? {} : { toleranceA }).length === 1;
 
 describe('perceiveBonds', () => {
-  it('perceiveBonds follows the ε = 0.40 Å check table (Cordero et al. 2008, Dalton Trans. 2832; METHODS.md §7, derived)', () => {
+  it('perceiveBonds follows the ε = 0.40 Å check table (Cordero et al. 2008, Dalton Trans. 2832; docs/methods.md#bond-perception, derived)', () => {
     expect(BOND_TOLERANCE_A).toBe(0.4);
     expect(bonded('C', 'C', 1.54)).toBe(true);
     expect(bonded('C', 'C', 2.5)).toBe(false); // 1,3 contact in a ring
@@ -22,7 +22,7 @@ describe('perceiveBonds', () => {
     expect(bonded('C', 'I', 2.14)).toBe(true);
   });
 
-  it('perceiveBonds puts the C–C threshold at r_C + r_C + ε = 1.92 Å (derived, METHODS.md §7)', () => {
+  it('perceiveBonds puts the C–C threshold at r_C + r_C + ε = 1.92 Å (derived, docs/methods.md#bond-perception)', () => {
     expect(bonded('C', 'C', 1.915)).toBe(true);
     expect(bonded('C', 'C', 1.925)).toBe(false);
     expect(bonded('C', 'Fe', 0.76 + 1.32 + 0.39)).toBe(true); // Fe low-spin radius 1.32

@@ -47,7 +47,7 @@ function generate(label: string, smiles: string, seed: number): ReferenceMolecul
   const coords = new Float64Array(3 * n);
   const atoms = [];
   for (let i = 0; i < n; i++) {
-    // openchemlib's y and z are the negatives of the file's (LIBRARIES.md); irrelevant for bonds, kept right
+    // openchemlib's y and z are the negatives of the file's (seen with openchemlib 9.25); irrelevant for bonds, kept right
     coords.set([mol.getAtomX(i), -mol.getAtomY(i), -mol.getAtomZ(i)], 3 * i);
     atoms.push({ element: mol.getAtomLabel(i), name: null });
   }

@@ -1,6 +1,6 @@
 /**
  * Private to `build`: start geometries for the six-ring forms a plain conformer search misses, made by the
- * inverse Cremer–Pople formula (METHODS.md §2.1 step 8), and the shape of the minimised result (the same
+ * inverse Cremer–Pople formula (docs/methods.md#cremer-pople, step 6), and the shape of the minimised result (the same
  * classifier `inspect` uses, so `build` and `inspect` always agree on what a form is called).
  */
 import type { Vec3 } from '../../model/molecule.js';
@@ -24,7 +24,7 @@ export type SixRingShape = RingShape;
 
 const SIX_LOCANTS = ['1', '2', '3', '4', '5', '6'];
 
-/** Q of the boat and twist-boat starts: the model value of METHODS.md §2.4 (derived), Å. */
+/** Q of the boat and twist-boat starts: the model value of docs/methods.md#cremer-pople-checks (derived), Å. */
 const BOAT_Q = 0.76;
 
 /**
@@ -133,9 +133,8 @@ function branches(
 }
 
 /**
- * Minimal label of a six-ring (atoms in bonded order): chair when θ < 30 or θ > 150; boat when φ is within
- * 15° of a multiple of 60, twist-boat otherwise, for 60 ≤ θ ≤ 120; `puckered` in between
- * (band scheme after METHODS.md §3.4, common practice, no source; widened chair cap).
+ * Shape of a six-ring (atoms in bonded order) with its Cremer–Pople θ, φ and Q: the shape `classifyRing` gives
+ * (nearest canonical form, docs/methods.md#shape-assignment).
  */
 export function sixRingShape(coords: Float64Array, ring: readonly number[]): {
   shape: SixRingShape;

@@ -1,5 +1,5 @@
 /**
- * `ensemble`: conformers ranked by energy with relative energies, Boltzmann populations (METHODS.md §9) with
+ * `ensemble`: conformers ranked by energy with relative energies, Boltzmann populations (docs/methods.md#boltzmann) with
  * degeneracies, duplicates merged by heavy-atom RMSD, ring shapes and population-weighted ⟨³J(H,H)⟩.
  *
  * Duplicate rule: a record within the RMSD threshold of a lower-energy record is the same structure found
@@ -27,7 +27,7 @@ export interface EnsembleOptions {
   readonly temperatureK?: number;
   /** Energy field and unit (default: the first field whose name contains "energy", unit from its name). */
   readonly energy?: EnergyOptions;
-  /** SD field or XYZ key holding each record's degeneracy g (METHODS.md §9). Default: g = 1 for every record. */
+  /** SD field or XYZ key holding each record's degeneracy g (docs/methods.md#boltzmann). Default: g = 1 for every record. */
   readonly degeneracyField?: string;
   /** Heavy-atom RMSD (Å) at or below which two records are duplicates. Default 0.125. */
   readonly rmsdThresholdA?: number;

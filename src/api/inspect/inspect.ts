@@ -1,5 +1,5 @@
 /**
- * `inspect`: the `conformark/report@1` document for every record of a file (DESIGN.md "JSON outputs").
+ * `inspect`: the `conformark/report@1` document for every record of a file (README.md "JSON documents").
  * Records stream one at a time; energies come from SD fields or XYZ comments with their units.
  */
 import type { FormatName, Molecule } from '../../model/molecule.js';

@@ -4,24 +4,26 @@
  * CSV line and a few counters. Writes `puckering.csv`, `summary.json` and the figures into a folder.
  */
 import { ConformarkError, ParseError, usageError, type Warning } from '../../model/errors.js';
-import type { FormatName, Molecule } from '../../model/molecule.js';
-import { readFrames, type Frame } from '../../io/readFrames.js';
+import type { FormatName } from '../../model/molecule.js';
+import type { Frame } from '../../io/readFrames.js';
 import type { ReadOptions } from '../../io/limits.js';
 import { protectInput } from '../../io/writeAtomic.js';
 import { OutputFolder, type ManifestKind } from '../../io/outputFolder.js';
 import { PHASE_THRESHOLD } from '../../geometry/cremerPople.js';
 import { PuckerValues } from '../../geometry/puckerKernel.js';
 import { torsionAt } from '../../geometry/torsionAt.js';
+import { longRingBond, makeWhole, type PeriodicBox } from '../../geometry/periodicBox.js';
 import { PLANAR_FORM, PUCKERED_FORM } from '../../analysis/shapeTable.js';
 import { TrajectoryStats, type DwellStats } from '../../analysis/trajectoryStats.js';
 import type { RingShapeOptions } from '../../analysis/ringShape.js';
 import type { FigureFormat } from '../figures/writeFigure.js';
 import type { Theme } from '../../render/theme.js';
-import { readRecord } from '../prepare.js';
+import { openTrajectory, type SourceFrame, type TrajectorySource } from './trajectorySource.js';
 import { TextStream } from './csvStream.js';
 import { TrajectoryRows } from './trajectoryRows.js';
-import { parseTimestep, type Timestep } from './timestep.js';
+import { convertTime, parseStartTime, parseTimestep, type Timestep } from './timestep.js';
 import { trajectorySetup, type TrajectorySetup } from './trajectorySetup.js';
+import { FrameBoxes, parseBox, ringBondLimits } from './trajectoryBox.js';
 import { TrajectoryPlots } from './trajectoryPlots.js';
 import { SHAPE_ORDER } from './trajectoryTheme.js';
 import { writeTrajectoryFiles } from './trajectoryOutput.js';
@@ -40,6 +42,8 @@ export interface TrajectoryOptions extends RingShapeOptions {
   readonly to?: number;
   /** Time between file frames, e.g. `{ value: 2, unit: 'ps' }` or `"2 ps"`. Default none (x is the frame). */
   readonly timestep?: Timestep | string;
+  /** Time of frame 1, e.g. `"10 ns"` (used with a timestep). Default: from the file where it carries it (DCD), else 0. */
+  readonly startTime?: Timestep | string;
   /** Torsions to add as CSV columns, `A-B-C-D` (numbers from 1 or atom names). Default none. */
   readonly torsions?: readonly string[];
   /** Figure formats written for each figure. Default `['svg']`. */
@@ -52,6 +56,15 @@ export interface TrajectoryOptions extends RingShapeOptions {
   readonly toleranceA?: number;
   /** Outer radius of the five-ring wheel, degrees of τm. Default 60. */
   readonly maxAmplitudeDeg?: number;
+  /**
+   * Periodic box for every frame, `"a b c"` or `"a b c α β γ"` (Å, degrees), or a box object. Default: the
+   * file's own cell (PDB CRYST1) where it has one. With a box, the ring (and each torsion) is made whole by
+   * the minimum image along its bonds in every frame; without one, a ring bond longer than the bond cut-off
+   * stops the run.
+   */
+  readonly box?: PeriodicBox | string;
+  /** Topology for a coordinate-only trajectory (DCD): a PDB (or SDF/MOL/XYZ) of the same atoms in the same order. */
+  readonly topology?: string;
   /** Reader options (format, limits). */
   readonly read?: ReadOptions;
   /** Called every few thousand frames and at the end with frames read and frames analysed. */
@@ -61,10 +74,14 @@ export interface TrajectoryOptions extends RingShapeOptions {
 /** What `analyzeTrajectory` returns (the content of `summary.json` plus the files written). */
 export interface TrajectorySummary {
   readonly schema: 'conformark/trajectory@1';
-  readonly source: { readonly path: string; readonly format: FormatName | null };
+  readonly source: { readonly path: string; readonly format: FormatName | 'dcd' | null; readonly topology: string | null };
   readonly ring: { readonly atoms: readonly number[]; readonly size: number; readonly locants: readonly string[]; readonly referenceRule: string };
   readonly frames: { readonly read: number; readonly analysed: number; readonly first: number; readonly last: number; readonly from: number; readonly to: number | null; readonly stride: number };
   readonly timestep: Timestep | null;
+  /** Time of frame 1 in the timestep's unit (0 unless given or read from the file); null without a timestep. */
+  readonly startTime: number | null;
+  /** Where the periodic box came from: `option` (`--box`), `file` (at least one frame's own cell) or null. */
+  readonly box: 'option' | 'file' | null;
   readonly occupancy: Readonly<Record<string, number>>;
   readonly counts: Readonly<Record<string, number>>;
   readonly transitions: Readonly<Record<string, Readonly<Record<string, number>>>>;
@@ -89,7 +106,18 @@ export const TRAJECTORY_MANIFEST: ManifestKind = {
 };
 
 function frameIssue(path: string, frame: Frame, code: string, message: string): ConformarkError {
-  return new ConformarkError({ code, file: path, line: frame.line, message: `frame ${frame.index} ${message}` });
+  return new ConformarkError({ code, file: path, line: frame.line || null, message: `frame ${frame.index} ${message}` });
+}
+
+/** The error for a ring bond longer than the bond cut-off (after the minimum image when there is a box). */
+function brokenRing(path: string, frame: Frame, c: Float64Array, ring: Int32Array, k: number, boxed: boolean): ConformarkError {
+  const i = ring[k]!, j = ring[(k + 1) % ring.length]!;
+  const d = Math.hypot(c[3 * j]! - c[3 * i]!, c[3 * j + 1]! - c[3 * i + 1]!, c[3 * j + 2]! - c[3 * i + 2]!);
+  const bond = `ring bond ${i + 1}-${j + 1} is ${d.toFixed(2)} Å`;
+  const message = boxed
+    ? `ring broken at frame ${frame.index}: ${bond} even at its nearest periodic image (wrong box?)`
+    : `ring broken across the periodic box at frame ${frame.index} (${bond}): give the box (--box "a b c") or unwrap the trajectory`;
+  return new ConformarkError({ code: 'ring-broken', file: path, line: frame.line || null, message });
 }
 
 /** Adds "frame N:" to a reader error about the frame after `last`. */
@@ -109,16 +137,20 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
   const from = options.from ?? 1;
   const to = options.to ?? Infinity;
   if (to < from) throw usageError('bad-option', `--to ${to} is before --from ${from}`);
-  const timestep = typeof options.timestep === 'string' ? parseTimestep(options.timestep) : options.timestep ?? null;
+  const given = typeof options.timestep === 'string' ? parseTimestep(options.timestep) : options.timestep ?? null;
   protectInput(path);
+  if (options.topology !== undefined) protectInput(options.topology);
   // 2. Frame 1 fixes bonds, ring, numbering and torsions.
-  const first = await readRecord(path, 1, options.read);
-  const setup = trajectorySetup(first, { ...options, ring: options.ring ?? '1', torsions: options.torsions ?? [] });
-  const folder = OutputFolder.open(options.dir, TRAJECTORY_MANIFEST);
+  const source = await openTrajectory(path, options.topology, options.read);
+  let folder: OutputFolder | null = null;
   try {
-    return await analyseInto(folder, path, first, setup, { ...options, stride, from, to, timestep });
+    const timestep: Timestep | null = given ?? (source.timestepPs !== null ? { value: +source.timestepPs.toPrecision(9), unit: 'ps' } : null);
+    const setup = trajectorySetup(source.first, { ...options, ring: options.ring ?? '1', torsions: options.torsions ?? [] });
+    folder = OutputFolder.open(options.dir, TRAJECTORY_MANIFEST);
+    return await analyseInto(folder, path, source, setup, { ...options, stride, from, to, timestep });
   } catch (err) {
-    folder.abort();
+    folder?.abort();
+    await source.frames.return?.(undefined);
     throw err;
   }
 }
@@ -130,10 +162,13 @@ interface Resolved extends Omit<TrajectoryOptions, 'timestep'> {
   readonly timestep: Timestep | null;
 }
 
-async function analyseInto(folder: OutputFolder, path: string, first: Molecule, setup: TrajectorySetup, options: Resolved): Promise<TrajectorySummary> {
+async function analyseInto(folder: OutputFolder, path: string, source: TrajectorySource, setup: TrajectorySetup, options: Resolved): Promise<TrajectorySummary> {
   const { stride, from, to, timestep } = options;
+  const { first } = source;
   const { ring, kernel, table, torsions } = setup;
   const n = ring.length;
+  const startGiven = typeof options.startTime === 'string' ? parseStartTime(options.startTime) : options.startTime ?? null;
+  const start = !timestep ? 0 : startGiven ? convertTime(startGiven.value, startGiven.unit, timestep.unit) : source.startPs !== null ? convertTime(source.startPs, 'ps', timestep.unit) : 0;
   const maxRingAtom = Math.max(...ring, ...torsions.flat());
   const csv = new TextStream(folder.path('puckering.csv'));
   folder.adopt('puckering.csv', csv.temporary);
@@ -150,16 +185,20 @@ async function analyseInto(folder: OutputFolder, path: string, first: Molecule, 
   const puckeredCat = catOf(PUCKERED_FORM);
   const csvDescriptor = table.descriptors.map((d) => (d === null ? '' : /[",]/.test(d) ? `"${d.replace(/"/g, '""')}"` : d));
   const v = new PuckerValues();
+  const optionBox = typeof options.box === 'string' ? parseBox(options.box) : options.box ?? null;
+  const fileBoxes = !optionBox && !source.binary && first.source.format === 'pdb' ? new FrameBoxes() : null;
+  const limits = ringBondLimits(first, ring, options.toleranceA);
+  let boxedFrames = 0;
   let read = 0;
   let analysed = 0;
   let firstAnalysed = 0;
   let lastAnalysed = 0;
   let planarFrames = 0;
-  const it = readFrames(path, { ...options.read, reuse: true })[Symbol.asyncIterator]();
+  const it = source.frames;
   try {
     // 3. The stream: one line and a few counters per analysed frame.
     for (;;) {
-      let next: IteratorResult<Frame>;
+      let next: IteratorResult<SourceFrame>;
       try {
         next = await it.next();
       } catch (err) {
@@ -178,6 +217,14 @@ async function analyseInto(folder: OutputFolder, path: string, first: Molecule, 
         const missing = c.length / 3 <= maxRingAtom ? ` (atom ${maxRingAtom + 1}, used by the analysis, is missing)` : '';
         throw frameIssue(path, frame, 'frame-atom-count', `has ${c.length / 3} atoms, frame 1 had ${setup.atomCount}${missing}`);
       }
+      const box = optionBox ?? frame.cell ?? fileBoxes?.of(frame.properties) ?? null;
+      if (box) {
+        boxedFrames++;
+        makeWhole(c, ring, box);
+        for (const t of torsions) makeWhole(c, t, box);
+      }
+      const broken = longRingBond(c, ring, limits);
+      if (broken >= 0) throw brokenRing(path, frame, c, ring, broken, box !== null);
       if (!kernel.measure(c, ring, v) || !Number.isFinite(v.Q)) {
         throw frameIssue(path, frame, 'degenerate-ring', Number.isFinite(v.Q) ? 'has collinear ring atoms' : 'has non-finite ring atom coordinates');
       }
@@ -190,7 +237,7 @@ async function analyseInto(folder: OutputFolder, path: string, first: Molecule, 
       rows.number(idx, 0);
       if (timestep) {
         rows.comma();
-        rows.number((idx - 1) * timestep.value, 6);
+        rows.number(start + (idx - 1) * timestep.value, 6);
       }
       rows.comma();
       rows.number(v.Q, 4);
@@ -230,7 +277,6 @@ async function analyseInto(folder: OutputFolder, path: string, first: Molecule, 
     csv.finish();
   } catch (err) {
     csv.abort();
-    await it.return?.(undefined);
     throw err;
   }
   // 4. Summary and figures.
@@ -241,10 +287,12 @@ async function analyseInto(folder: OutputFolder, path: string, first: Molecule, 
   const fs = formStats.summary();
   const summary: Omit<TrajectorySummary, 'files'> = {
     schema: 'conformark/trajectory@1',
-    source: { path, format: first.source.format },
+    source: { path, format: source.binary ?? first.source.format, topology: options.topology ?? null },
     ring: { atoms: Array.from(ring, (a) => a + 1), size: n, locants: setup.locants, referenceRule: setup.referenceRule },
     frames: { read, analysed, first: firstAnalysed, last: lastAnalysed, from, to: Number.isFinite(to) ? to : null, stride },
     timestep,
+    startTime: timestep ? start : null,
+    box: optionBox ? 'option' : boxedFrames > 0 ? 'file' : null,
     occupancy: st.occupancy,
     counts: st.counts,
     transitions: st.transitions,

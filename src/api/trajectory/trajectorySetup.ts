@@ -6,6 +6,7 @@ import type { Molecule } from '../../model/molecule.js';
 import { usageError } from '../../model/errors.js';
 import { atomIndex } from '../../perceive/atomIndex.js';
 import { ringSelection } from '../../perceive/ringSelection.js';
+import { ringTokenKind, splitAtomList } from '../../perceive/atomSelection.js';
 import { ringReference } from '../../analysis/ringReference.js';
 import { ShapeTable } from '../../analysis/shapeTable.js';
 import type { RingShapeOptions } from '../../analysis/ringShape.js';
@@ -36,7 +37,7 @@ export interface SetupOptions extends RingShapeOptions {
 }
 
 function torsionAtoms(mol: Molecule, text: string): [number, number, number, number] {
-  const parts = text.split('-');
+  const parts = splitAtomList(text);
   if (parts.length !== 4 || parts.some((p) => p.trim() === '')) {
     throw usageError('bad-selection', `--torsion expects four atoms joined by '-', e.g. 1-2-3-4, got "${text}"`);
   }
@@ -52,7 +53,7 @@ function torsionAtoms(mol: Molecule, text: string): [number, number, number, num
 export function trajectorySetup(first: Molecule, options: SetupOptions): TrajectorySetup {
   const { molecule, graph, rings } = prepareRecord(first, { toleranceA: options.toleranceA });
   const picked = ringSelection(molecule, graph, rings, options.ring);
-  const ordered = !/^\s*\d+\s*$/.test(options.ring);
+  const ordered = ringTokenKind(options.ring) === 'atoms';
   const ref = ringReference(molecule, graph, picked, { ordered });
   if (ref.atoms.length < 4) throw usageError('bad-ring', `ring ${ref.atoms.map((a) => a + 1).join('-')} has ${ref.atoms.length} atoms: puckering needs at least 4`);
   const torsions = options.torsions.map((t) => torsionAtoms(molecule, t));

@@ -6,6 +6,7 @@ import {
   protectInput,
   readRecord,
   ringSelection,
+  ringTokenKind,
   toPlacementJson,
   toReportRing,
   writeAtomic,
@@ -39,7 +40,7 @@ export function registerChair(program: Command): void {
     .command('chair')
     .description('draw a ring: the trade chair (template) for chairs, the true orthographic view (projected) for any ring')
     .argument('<file>', 'coordinate file (XYZ, SDF/molfile, PDB; .gz read transparently; - for standard input)')
-    .option('--ring <R>', 'ring number as inspect lists it, or an ordered atom list such as 1-2-3-4-5-6 or O5-C1-C2-C3-C4-C5 (default: the first six-ring, else the first ring)')
+    .option('--ring <R>', 'ring number as inspect lists it, an ordered atom list such as 1-2-3-4-5-6 or O5-C1-C2-C3-C4-C5, or a residue such as A/NAG501/ (default: the first six-ring, else the first ring)')
     .option('--record <n>', 'record (frame) to draw, counted from 1 (default 1)')
     .option('--view <mode>', 'template (trade chair; chairs only) or projected (true view of any ring) (default: template for chairs, else projected)')
     .option('--elevation <deg>', 'viewer elevation above the ring plane in degrees, -90 to 90, for the projected view (giving it picks that view) (default 20)')
@@ -56,8 +57,8 @@ export function registerChair(program: Command): void {
       if (flags.output) protectInput(file);
       const recordNumber = wholeNumber('--record', flags.record ?? '1');
       const { molecule, graph, rings } = prepareRecord(await readRecord(file, recordNumber, read));
-      const ordered = flags.ring !== undefined && !/^\s*\d+\s*$/.test(flags.ring);
-      const ring = flags.ring === undefined ? undefined : ordered ? ringSelection(molecule, graph, rings, flags.ring) : Number(flags.ring.trim());
+      const ordered = flags.ring !== undefined && ringTokenKind(flags.ring) === 'atoms';
+      const ring = flags.ring === undefined ? undefined : ringNumberOrAtoms(ringSelection(molecule, graph, rings, flags.ring), rings, ordered);
       const figure = chairFigure(molecule, {
         graph, rings, ring, ordered,
         view: flags.view === undefined ? undefined : oneOf<RingView>('--view', flags.view, ['template', 'projected'], 'template'),
@@ -79,6 +80,13 @@ export function registerChair(program: Command): void {
       if (flags.output) await writeFigure(flags.output, figure.svg, { dpi: dpiOption(flags.dpi) });
       else process.stdout.write(`${figure.svg}\n`);
     });
+}
+
+/** A selected ring as its number among `rings` (so reports carry the ring id), or its atoms when ordered by hand. */
+function ringNumberOrAtoms(picked: number[], rings: readonly (readonly number[])[], ordered: boolean): number[] | number {
+  if (ordered) return picked;
+  const k = rings.findIndex((r) => r.length === picked.length && r.every((a, i) => a === picked[i]));
+  return k < 0 ? picked : k + 1;
 }
 
 /** `--hydrogens all|stereo|none` (the earlier `show` and `hide` still read as `all` and `none`). */

@@ -46,7 +46,7 @@ interface NewmanFlags {
   dir?: string;
 }
 
-const collect = (value: string, list: string[]) => [...list, value];
+const collect = (value: string, list: string[] | undefined) => [...(list ?? []), value];
 
 /** Where figure `k` of several goes: `DIR/newman-A-B.svg`, or the `-o` pattern with `{bond}` replaced. */
 function figurePath(flags: NewmanFlags, bond: [number, number]): string {
@@ -61,7 +61,7 @@ export function registerNewman(program: Command): void {
     .command('newman')
     .description('Newman projection along a bond, looking from its first atom (front) to its second (back)')
     .argument('<file>', 'coordinate file (XYZ, SDF/molfile, PDB; .gz read transparently; - for standard input)')
-    .requiredOption('--bond <A-B>', 'the bond, front atom first: numbers from 1 or atom names, e.g. 2-3 or C2-C3; repeat it or give a list 1-2,3-4 for several (one figure each, or one JSON array)', collect, [])
+    .requiredOption('--bond <A-B>', 'the bond, front atom first: positions from 1, atom names, #serials or chain/residue/atom, e.g. 2-3, C2-C3, A/PRO42/CA-A/PRO42/CB; repeat it or give a list 1-2,3-4 for several (one figure each, or one JSON array)', collect)
     .option('--record <n>', 'record (frame) to draw, counted from 1 (default 1)')
     .option('--up <atom>', 'front substituent drawn at 12 o\'clock (default: ring neighbour for ring bonds, else the heaviest)')
     .option('--angles <mode>', 'true: measured projected azimuths; ideal: even 120° spacing with measured torsions printed (default true)')

@@ -11,6 +11,9 @@ interface TrajectoryFlags {
   from?: string;
   to?: string;
   timestep?: string[];
+  box?: string;
+  startTime?: string[];
+  topology?: string;
   torsion?: string[];
   formats?: string;
   theme?: string;
@@ -44,13 +47,16 @@ export function registerTrajectory(program: Command): void {
   program
     .command('trajectory')
     .description('ring puckering over every frame of a trajectory: puckering.csv, summary.json and figures in a folder')
-    .argument('<file>', 'multi-frame XYZ, multi-MODEL PDB or multi-record SDF (.gz read transparently)')
+    .argument('<file>', 'multi-frame XYZ, multi-MODEL PDB or multi-record SDF (.gz read transparently), or DCD with --topology')
     .option('--ring <R>', 'ring number as inspect lists it, or an ordered atom list such as 1-2-3-4-5-6 (default 1)')
     .requiredOption('-d, --dir <dir>', 'output folder (created)')
     .option('--stride <n>', 'analyse every nth frame (default 1)')
     .option('--from <n>', 'first frame to analyse, counted from 1 (default 1)')
     .option('--to <n>', 'last frame to analyse (default: the last)')
     .option('--timestep <value...>', 'time between frames with a unit, e.g. "2 ps" or 2ps (fs, ps, ns, us, ms, s)')
+    .option('--start-time <value...>', 'time of frame 1 with a unit, e.g. "10 ns" (default: from the file where it has it, else 0)')
+    .option('--topology <file>', 'atoms of a coordinate-only trajectory (DCD): a PDB of the same system, same atom order')
+    .option('--box <cell>', 'periodic box "a b c" or "a b c alpha beta gamma" (Å, degrees); default the file\'s cell (PDB CRYST1)')
     .option('--torsion <A-B-C-D...>', 'torsions to add as CSV columns (numbers from 1 or atom names); repeatable')
     .option('--formats <list>', 'figure formats, comma-separated: svg, png, pdf (default svg)')
     .option('--dpi <n>', DPI_HELP)
@@ -68,6 +74,9 @@ export function registerTrajectory(program: Command): void {
           to: flags.to === undefined ? undefined : wholeNumber('--to', flags.to),
           timestep: flags.timestep === undefined ? undefined : parseTimestep(flags.timestep.join(' ')),
           torsions: flags.torsion ?? [],
+          box: flags.box,
+          startTime: flags.startTime?.join(' '),
+          topology: flags.topology,
           formats: formats(flags.formats),
           theme: flags.theme,
           dpi: dpiOption(flags.dpi),

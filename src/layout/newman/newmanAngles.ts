@@ -1,4 +1,4 @@
-/** Drawn azimuths of a Newman figure: the true projected ones, or textbook 120° spacing (METHODS.md §10.1). */
+/** Drawn azimuths of a Newman figure: the true projected ones, or textbook 120° spacing (docs/methods.md#newman-projection). */
 import type { NewmanSubstituent, NewmanView } from '../../analysis/newman.js';
 import { wrap180, wrap360 } from '../../geometry/vec3.js';
 

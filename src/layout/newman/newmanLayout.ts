@@ -1,6 +1,6 @@
 /**
  * Newman projection → Scene. Front bonds meet at the centre; the back atom is a circle whose bonds start at
- * its rim (Gold Book N04134); azimuth α is placed at x = cx + r sin α, y = cy − r cos α (METHODS.md §10.1),
+ * its rim (Gold Book N04134); azimuth α is placed at x = cx + r sin α, y = cy − r cos α (docs/methods.md#newman-projection),
  * so a clockwise torsion reads clockwise on the page.
  */
 import type { Molecule } from '../../model/molecule.js';

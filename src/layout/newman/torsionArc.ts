@@ -7,7 +7,7 @@ const RAD = Math.PI / 180;
  * SVG path of the arc of radius `r` about (cx, cy) from azimuth `fromDeg` sweeping `sweepDeg` (positive =
  * clockwise on screen). Azimuths are clockwise from 12 o'clock; d3-path angles are from +x, clockwise in
  * SVG's y-down space, hence the −90° shift. An open arc (not d3-shape's `arc()`, which closes a band when the
- * radii are equal, LIBRARIES.md).
+ * radii are equal; seen with svg.js 3.2.8).
  * @example torsionArcPath(50, 50, 10, 0, 60) // 'M50,40A10,10,0,0,1,58.66,45'
  */
 export function torsionArcPath(cx: number, cy: number, r: number, fromDeg: number, sweepDeg: number, digits = 2): string {

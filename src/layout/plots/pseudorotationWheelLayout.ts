@@ -1,7 +1,7 @@
 /**
  * `pucker-map` for five-rings: a pseudorotation wheel. The Altona–Sundaralingam phase P runs clockwise from
  * 12 o'clock, the amplitude τm outward from the centre (grid circles every 20°); the 10 envelopes and 10 twists
- * sit on the rim at their P (P ≈ φ2 + 90 in the ring's reference numbering, METHODS.md §4.1, derived).
+ * sit on the rim at their P (P ≈ φ2 + 90 in the ring's reference numbering, docs/methods.md#five-ring-forms, derived).
  * Frames are binned into equal-area cells of the wheel with log shading.
  */
 import type { PolarGrid } from '../../analysis/polarGrid.js';

@@ -8,7 +8,7 @@
 import type { Molecule } from '../../model/molecule.js';
 import type { Graph } from '../../perceive/graph.js';
 import type { RingAnalysis } from '../../analysis/ringAnalysis.js';
-import { firstFree, grow, type Box, type Obstacles, type Segment } from '../text/labelPlacement.js';
+import { firstFree, grow, segmentCrossing, type Box, type Obstacles, type Segment } from '../text/labelPlacement.js';
 import { boxAt, textBox, type TextBox } from '../text/textBox.js';
 import { approximateMeasure, DEFAULT_METRICS, shiftItem, textStyle, type Scene, type SceneItem, type SceneLine, type SceneMetrics, type TextMeasure, type TextRun, type TextStyle } from '../scene.js';
 import { ringCaption, ringDescription, ringTitle, type CaptionRun } from './ringCaption.js';
@@ -98,7 +98,7 @@ export function layoutRing(placement: RingPlacement, ring: RingAnalysis, mol: Mo
   drawn.forEach((d, i) => {
     for (const far of drawn.slice(0, i)) {
       if (far.line.atoms!.some((a) => d.line.atoms!.includes(a))) continue;
-      const t = crossing(d.line, far.line);
+      const t = segmentCrossing(d.line, far.line);
       if (t === null) continue;
       const len = Math.hypot(d.line.x2 - d.line.x1, d.line.y2 - d.line.y1);
       const [t0, t1] = [Math.max(0, t - halfGap / len), Math.min(1, t + halfGap / len)];
@@ -148,7 +148,10 @@ export function layoutRing(placement: RingPlacement, ring: RingAnalysis, mol: Mo
     const t = textBox(text, locantStyle, measure);
     const p = at(a);
     const candidates = aroundCandidates(p.x, p.y, AZ(p.x - cx, p.y - cy), (cut.get(a) ?? 0) + metrics.gap, t, step);
-    addText('ring-locant', text, candidates[firstFree(candidates, obstacles, clearance * 0.8)]!, t, locantStyle, a);
+    // a locant reads as its vertex's only when it is nearer that vertex than any other bond end
+    const others = [...bondEnds].filter(([b]) => b !== a).map(([, pt]) => pt);
+    const picked = pickBondLabel(candidates, obstacles, clearance * 0.8, p, others, Infinity);
+    addText('ring-locant', text, picked.clean ? picked.box : candidates[firstFree(candidates, obstacles, clearance * 0.8)]!, t, locantStyle, a);
   });
 
   // 5. Bounds, caption, shift into positive coordinates.
@@ -186,17 +189,6 @@ export function layoutRing(placement: RingPlacement, ring: RingAnalysis, mol: Mo
     desc: ringDescription(ring, placement.view, placement.elevationDeg, element),
     items: [...items, ...texts].map((it) => shiftItem(it, dx, dy)),
   };
-}
-
-/** Parameter t along `a` where it properly crosses `b` (both interiors), or null. */
-function crossing(a: Segment, b: Segment): number | null {
-  const [rx, ry] = [a.x2 - a.x1, a.y2 - a.y1];
-  const [sx, sy] = [b.x2 - b.x1, b.y2 - b.y1];
-  const den = rx * sy - ry * sx;
-  if (Math.abs(den) < 1e-9) return null;
-  const t = ((b.x1 - a.x1) * sy - (b.y1 - a.y1) * sx) / den;
-  const u = ((b.x1 - a.x1) * ry - (b.y1 - a.y1) * rx) / den;
-  return t > 0.02 && t < 0.98 && u > 0.02 && u < 0.98 ? t : null;
 }
 
 /**

@@ -39,7 +39,7 @@ export interface RingPlacement {
   readonly outline?: ChairOutlineKind;
 }
 
-/** Default elevation of both views, degrees (METHODS.md §10.2: 15–25° looks conventional). */
+/** Default elevation of both views, degrees (docs/methods.md#chair-drawing: 15–25° looks conventional). */
 export const DEFAULT_ELEVATION_DEG = 20;
 
 /** The JSON form of a placement: 1-based atoms, screen coordinates in Å rounded to 1e-4. */

@@ -1,6 +1,6 @@
 /**
  * True orthographic view of a ring of any size and shape with its substituent bonds, in the ring's own frame
- * (METHODS.md §10.2 [D]): n = Cremer–Pople normal, h = from the centroid toward the midpoint of the bond between
+ * (docs/methods.md#chair-drawing [D]): n = Cremer–Pople normal, h = from the centroid toward the midpoint of the bond between
  * reference atoms 1 and 2, viewer on the +n side at the given elevation. Nothing is idealised.
  */
 import { atomPosition, type Molecule } from '../../model/molecule.js';

@@ -1,5 +1,5 @@
 /**
- * The ring's own viewing frame (METHODS.md §10.2 "how to draw from coordinates" [D]): n = the Cremer–Pople
+ * The ring's own viewing frame (docs/methods.md#chair-drawing "how to draw from coordinates" [D]): n = the Cremer–Pople
  * normal, h = a unit in-plane direction, viewer on the +n side at elevation e; forward f = cos e·h − sin e·n,
  * up u = sin e·h + cos e·n, right r = f × u; screen x = p·r, y_svg = −(p·u). A proper rotation, never a mirror,
  * so the ring reads clockwise on screen exactly when it reads clockwise from +n.

@@ -10,7 +10,7 @@
  * - `textOverlaps`: text over a drawn line, circle outline, or other text.
  */
 import { approximateMeasure, type Scene, type SceneItem, type SceneLine, type SceneText, type TextMeasure } from '../scene.js';
-import { boxesOverlap, ringHitsBox, segmentHitsBox, type Box, type Segment } from './labelPlacement.js';
+import { boxesOverlap, ringHitsBox, segmentCrossing, segmentHitsBox, type Box, type Segment } from './labelPlacement.js';
 import { runsExtent, runsWidth } from './textRuns.js';
 
 /** The counts of {@link figureLegibility}. */
@@ -69,17 +69,6 @@ function pointSegmentDistance(x: number, y: number, s: Segment): number {
   return Math.hypot(x - (s.x1 + t * dx), y - (s.y1 + t * dy));
 }
 
-/** Point where two segments properly cross (both interiors), or null. */
-function crossingPoint(a: Segment, b: Segment): { x: number; y: number } | null {
-  const [rx, ry] = [a.x2 - a.x1, a.y2 - a.y1];
-  const [sx, sy] = [b.x2 - b.x1, b.y2 - b.y1];
-  const den = rx * sy - ry * sx;
-  if (Math.abs(den) < 1e-9) return null;
-  const t = ((b.x1 - a.x1) * sy - (b.y1 - a.y1) * sx) / den;
-  const u = ((b.x1 - a.x1) * ry - (b.y1 - a.y1) * rx) / den;
-  return t > 0.02 && t < 0.98 && u > 0.02 && u < 0.98 ? { x: a.x1 + t * rx, y: a.y1 + t * ry } : null;
-}
-
 const shrink = (b: Box, d: number): Box => ({ x0: b.x0 + d, y0: b.y0 + d, x1: b.x1 - d, y1: b.y1 - d });
 const atomName = (a: number) => `atom ${a + 1}`;
 
@@ -136,8 +125,9 @@ export function figureLegibility(scene: Scene, options: LegibilityOptions = {}):
     for (let j = i + 1; j < bonds.length; j++) {
       const [a, b] = [bonds[i]!, bonds[j]!];
       if (a.atoms!.some((x) => b.atoms!.includes(x))) continue;
-      const p = crossingPoint(a, b);
-      if (!p) continue;
+      const t = segmentCrossing(a, b);
+      if (t === null) continue;
+      const p = { x: a.x1 + t * (a.x2 - a.x1), y: a.y1 + t * (a.y2 - a.y1) };
       const gap = halos.some((h) => pointSegmentDistance(p.x, p.y, h) < 0.5);
       if (!gap) add('uncutCrossings', `bonds ${a.atoms!.map((x) => x + 1).join('–')} and ${b.atoms!.map((x) => x + 1).join('–')} cross without a gap`);
     }

@@ -36,6 +36,17 @@ export function boxesOverlap(a: Box, b: Box): boolean {
   return a.x0 < b.x1 && b.x0 < a.x1 && a.y0 < b.y1 && b.y0 < a.y1;
 }
 
+/** Parameter t along `a` where it properly crosses `b` (both interiors, ends trimmed by 2 %), or null. */
+export function segmentCrossing(a: Segment, b: Segment): number | null {
+  const [rx, ry] = [a.x2 - a.x1, a.y2 - a.y1];
+  const [sx, sy] = [b.x2 - b.x1, b.y2 - b.y1];
+  const den = rx * sy - ry * sx;
+  if (Math.abs(den) < 1e-9) return null;
+  const t = ((b.x1 - a.x1) * sy - (b.y1 - a.y1) * sx) / den;
+  const u = ((b.x1 - a.x1) * ry - (b.y1 - a.y1) * rx) / den;
+  return t > 0.02 && t < 0.98 && u > 0.02 && u < 0.98 ? t : null;
+}
+
 /** True when the segment passes through the box interior (Liang–Barsky clipping). */
 export function segmentHitsBox(s: Segment, b: Box): boolean {
   const dx = s.x2 - s.x1;
