@@ -10,6 +10,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { linkSync, mkdtempSync, readdirSync, readFileSync, rmSync, symlinkSync, writeFileSync, copyFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { spawnSync } from 'node:child_process';
+import { gzipSync } from 'node:zlib';
 import { COMMANDS } from '../../src/cli/commands/index.js';
 import { cli, cliInProcess, degenerateXyz, leaks, unsafeMarkup } from './robustnessHelpers.js';
 
@@ -127,6 +129,18 @@ describe('conformark limits', () => {
     expect(piped.status).toBe(2);
   });
 
+  it('conformark inspect on a gzip text bomb (400 MB of comment lines in 4,000 records) stops at the text limit under a 256 MB heap', async () => {
+    // each record: a water with a 99,000-character comment; gzip members concatenated (RFC 1952 §2.2)
+    const record = gzipSync(`3\n${'c'.repeat(99_000)}\nO 0 0 0\nH 0.96 0 0\nH -0.24 0.93 0\n`);
+    const path = join(dir, 'bomb.xyz.gz');
+    writeFileSync(path, Buffer.concat(Array.from({ length: 4000 }, () => record)));
+    const bin = new URL('../../bin/conformark.js', import.meta.url).pathname;
+    const r = spawnSync(process.execPath, ['--max-old-space-size=256', bin, 'inspect', path], { encoding: 'utf8' });
+    // 64,000,000 characters at 99,000 per record: record 647 (its count line is line 5 × 646 + 1) passes the limit
+    expect(r.stderr).toBe(`conformark: ${path}:${5 * 646 + 1}: record 647: more than 64000000 characters of titles and data fields in all records to hold at once (raise with --max-total-text, option maxTotalText)\n`);
+    expect(r.status).toBe(2);
+  }, 60_000);
+
   it('conformark inspect on an SD record with a 1.2 MB data field stops with data-too-long at the line it passes the cap', async () => {
     const path = join(dir, 'big-field.sdf');
     const water = readFileSync('test/data/good-water.sdf', 'utf8');
@@ -145,6 +159,7 @@ describe('conformark limits', () => {
       [['--max-total-atoms', '5', 'inspect', path], `${path}:6: record 2: more than 5 atoms in all records to hold at once (raise with --max-total-atoms, option maxTotalAtoms)`],
       [['newman', path, '--bond', '1-2', '--max-atoms', '2'], `${path}:1: count line says 3 atoms; the limit is 2 (option maxAtoms)`],
       [['newman', path, '--bond', '1-2', '--max-line-length', '5'], `${path}:3: line is longer than 5 characters`],
+      [['--max-total-text', '5', 'inspect', path], `${path}:11: record 3: more than 5 characters of titles and data fields in all records to hold at once (raise with --max-total-text, option maxTotalText)`],
       [['inspect', path, '--max-records', 'lots'], '--max-records expects a whole number from 1, got "lots"'],
     ];
     for (const [args, message] of cases) {

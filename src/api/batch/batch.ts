@@ -36,6 +36,8 @@ export interface BatchOptions {
   readonly formats?: readonly FigureFormat[];
   /** PNG resolution, dots per inch. Default 300. */
   readonly dpi?: number;
+  /** Most pixels of one PNG figure or sheet. Default 64,000,000. */
+  readonly maxPixels?: number;
   /** Theme object, built-in name or path. Default `column`. */
   readonly theme?: Theme | string;
   /** Prefix before every figure's own id prefix (`<prefix>r01-newman-3-4-`). Default none. */
@@ -48,7 +50,7 @@ export interface BatchOptions {
   readonly sheetColumns?: number;
   /** Table formats. Default `['csv', 'md', 'tex']`; `[]` writes none. */
   readonly tables?: readonly TableFormat[];
-  /** Worker threads for figures. Default min(4, available cores). 1 draws in this thread. */
+  /** Worker threads for figures. Default min(4, available cores); at most the available cores. 1 draws in this thread. */
   readonly jobs?: number;
   /** Workers are used only above this many figures. Default 40. */
   readonly workerThreshold?: number;
@@ -186,10 +188,12 @@ async function batchInto(folder: OutputFolder, path: string, theme: Theme, optio
   const total = tasks.reduce((n, t) => n + t.jobs.length, 0);
 
   // 3. Draw (on workers when there are many), then write every figure.
-  const threads = total > (options.workerThreshold ?? 40) ? (options.jobs ?? Math.min(4, availableParallelism())) : 1;
+  const cores = availableParallelism();
+  if (options.jobs !== undefined && options.jobs > cores) notes.push(`jobs ${options.jobs} is more than the ${cores} cores here: using ${cores}`);
+  const threads = total > (options.workerThreshold ?? 40) ? Math.min(options.jobs ?? 4, cores) : 1;
   let done = 0;
   options.onProgress?.(0, total);
-  const drawn = await drawTasks(tasks, { theme, formats: formats.filter((f) => f !== 'svg'), dpi: options.dpi }, threads, (n) => {
+  const drawn = await drawTasks(tasks, { theme, formats: formats.filter((f) => f !== 'svg'), dpi: options.dpi, maxPixels: options.maxPixels }, threads, (n) => {
     done += n;
     options.onProgress?.(done, total);
   });
@@ -216,7 +220,7 @@ async function batchInto(folder: OutputFolder, path: string, theme: Theme, optio
       });
       for (const format of formats) {
         const file = `sheet-${s + 1}.${format}`;
-        folder.write(file, await figureBytes(svg, format, { dpi: options.dpi }));
+        folder.write(file, await figureBytes(svg, format, { dpi: options.dpi, maxPixels: options.maxPixels }));
         figures.push({ record: null, kind: 'sheet', bond: null, ring: null, path: file });
       }
     }

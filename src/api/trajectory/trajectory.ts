@@ -50,6 +50,8 @@ export interface TrajectoryOptions extends RingShapeOptions {
   readonly formats?: readonly FigureFormat[];
   /** PNG resolution, dots per inch. Default 300. */
   readonly dpi?: number;
+  /** Most pixels of one PNG figure. Default 64,000,000. */
+  readonly maxPixels?: number;
   /** Theme object, built-in name or path. Default `column`. */
   readonly theme?: Theme | string;
   /** Bond tolerance for perception on frame 1, Å. Default 0.40. */
@@ -301,6 +303,6 @@ async function analyseInto(folder: OutputFolder, path: string, source: Trajector
     torsions: setup.torsionColumns,
     warnings,
   };
-  const files = await writeTrajectoryFiles(folder, summary, plots, setup, { formats: options.formats ?? ['svg'], theme: options.theme, timestep, dpi: options.dpi });
+  const files = await writeTrajectoryFiles(folder, summary, plots, setup, { formats: options.formats ?? ['svg'], theme: options.theme, timestep, dpi: options.dpi, maxPixels: options.maxPixels });
   return { ...summary, files: ['puckering.csv', ...files] };
 }

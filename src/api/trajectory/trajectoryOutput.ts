@@ -23,6 +23,8 @@ export interface TrajectoryFigureOptions {
   readonly timestep: Timestep | null;
   /** PNG resolution, dots per inch. Default 300. */
   readonly dpi?: number;
+  /** Most pixels of one PNG. Default 64,000,000. */
+  readonly maxPixels?: number;
 }
 
 const angle = (label: string, max: number, step: number, wraps: boolean, extra: Partial<SeriesSpec> = {}): SeriesSpec => ({
@@ -76,7 +78,7 @@ export async function writeTrajectoryFiles(
   }
   for (const [name, svg] of figures) {
     for (const format of options.formats) {
-      folder.write(`${name}.${format}`, await figureBytes(svg, format, { dpi: options.dpi }));
+      folder.write(`${name}.${format}`, await figureBytes(svg, format, { dpi: options.dpi, maxPixels: options.maxPixels }));
       files.push(`${name}.${format}`);
     }
   }
