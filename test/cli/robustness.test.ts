@@ -25,6 +25,8 @@ const CORPUS: readonly (readonly [string, string])[] = [
   ['bad-conect-text.pdb', "bad-conect-text.pdb:5: expected atom serial numbers in CONECT, found 'two'"],
   ['bad-conect.pdb', 'bad-conect.pdb:5: CONECT refers to atom serial 99, which is not in the file'],
   ['bad-coords.pdb', "bad-coords.pdb:3: x coordinate 'x.957' is not a number (columns 31-38)"],
+  ['few-bonds.sdf', 'few-bonds.sdf:4: counts line says 1 bond, but a bond line follows them (line 9)'],
+  ['few-atoms.sdf', 'few-atoms.sdf:4: counts line says 2 atoms, but an atom line follows them (line 7)'],
   ['bad-counts.sdf', "bad-counts.sdf:4: expected a counts line (atoms, bonds, ..., V2000), found 'x  y  0  0  0  0  0  0  0  0999 V2000'"],
   ['blank.xyz', 'blank.xyz: the file is empty'],
   ['empty.xyz', 'empty.xyz: the file is empty'],
