@@ -7,7 +7,7 @@
  * degenerate input also run through the binary itself (`cli`).
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { linkSync, mkdtempSync, readdirSync, readFileSync, rmSync, symlinkSync, writeFileSync, copyFileSync } from 'node:fs';
+import { linkSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, symlinkSync, writeFileSync, copyFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { spawnSync } from 'node:child_process';
@@ -141,6 +141,25 @@ describe('conformark limits', () => {
     // 64,000,000 characters at 99,000 per record: record 647 (its count line is line 5 × 646 + 1) passes the limit
     expect(r.stderr).toBe(`conformark: ${path}:${5 * 646 + 1}: record 647: more than 64000000 characters of titles and data fields in all records to hold at once (raise with --max-total-text, option maxTotalText)\n`);
     expect(r.status).toBe(2);
+  }, 60_000);
+
+  it('conformark newman - on a 600-model PDB from standard input streams it under a 96 MB heap (spooled, as a file is read); the spool is removed', () => {
+    // 600 models × 1,000 atoms, CONECT after the last model (so the models cannot be released as they are read)
+    const atom = (k: number) => {
+      const [x, y, z] = [k === 1 ? 1.5 : 3 * (k % 20), (3 * Math.floor(k / 20)) % 60, 3 * Math.floor(k / 400)];
+      return `HETATM${String(k + 1).padStart(5)}  C   LIG A${String(1 + Math.floor(k / 10)).padStart(4)}    ${x.toFixed(3).padStart(8)}${y.toFixed(3).padStart(8)}${z.toFixed(3).padStart(8)}  1.00  0.00           C  `;
+    };
+    const body = Array.from({ length: 1000 }, (_, k) => atom(k)).join('\n');
+    const models = Array.from({ length: 600 }, (_, m) => `MODEL     ${String(m + 1).padStart(4)}\n${body}\nENDMDL`);
+    const input = gzipSync(`${models.join('\n')}\nCONECT    1    2\nEND\n`);
+    const tmp = join(dir, 'spool-tmp');
+    mkdirSync(tmp);
+    const bin = new URL('../../bin/conformark.js', import.meta.url).pathname;
+    const r = spawnSync(process.execPath, ['--max-old-space-size=96', bin, 'newman', '-', '--bond', '1-2'], { input, encoding: 'utf8', env: { ...process.env, TMPDIR: tmp } });
+    expect(r.stderr).toBe('');
+    expect(r.status).toBe(0);
+    expect(r.stdout).toMatch(/^<svg /);
+    expect(readdirSync(tmp)).toEqual([]);
   }, 60_000);
 
   it('conformark inspect on an SD record with a 1.2 MB data field stops with data-too-long at the line it passes the cap', async () => {
