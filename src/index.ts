@@ -12,6 +12,7 @@ export { klynePrelog, torsionRelation } from './geometry/klynePrelog.js';
 export type { KlynePrelog, TorsionRelation } from './geometry/klynePrelog.js';
 export { wrap180, wrap360 } from './geometry/vec3.js';
 export { writeAtomic, protectInput } from './io/writeAtomic.js';
+export { abandonOutputs } from './io/abandonOutputs.js';
 export { buildGraph } from './perceive/graph.js';
 export type { Graph } from './perceive/graph.js';
 export {
@@ -127,7 +128,7 @@ export type { Legibility, LegibilityCounts, LegibilityOptions, LegibilityProblem
 export { textRuns, runsText, MIN_TEXT_SIZE } from './layout/text/textRuns.js';
 export { renderSvg } from './render/renderSvg.js';
 export type { RenderSvgOptions } from './render/renderSvg.js';
-export { renderPng, pngResolution, DEFAULT_DPI } from './render/renderPng.js';
+export { renderPng, pngResolution, DEFAULT_DPI, DEFAULT_MAX_PIXELS } from './render/renderPng.js';
 export type { RenderPngOptions } from './render/renderPng.js';
 export { renderPdf, svgSizePt } from './render/renderPdf.js';
 export { measureText } from './render/svgWindow.js';

@@ -53,7 +53,7 @@ export function registerChair(program: Command): void {
     .option('--dpi <n>', DPI_HELP)
     .option('-o, --output <file>', 'write to FILE (.svg, .png or .pdf; .json with --json) instead of standard output')
     .action(async (file: string, flags: ChairFlags, command: Command) => {
-      const { read } = limitsOf(command);
+      const { read, maxPixels } = limitsOf(command);
       if (flags.output) protectInput(file);
       const recordNumber = wholeNumber('--record', flags.record ?? '1');
       const { molecule, graph, rings } = prepareRecord(await readRecord(file, recordNumber, read), ringScopeOf(command));
@@ -80,7 +80,7 @@ export function registerChair(program: Command): void {
         else process.stdout.write(text);
         return;
       }
-      if (flags.output) await writeFigure(flags.output, figure.svg, { dpi: dpiOption(flags.dpi) });
+      if (flags.output) await writeFigure(flags.output, figure.svg, { dpi: dpiOption(flags.dpi), maxPixels });
       else process.stdout.write(`${figure.svg}\n`);
     });
 }
