@@ -111,7 +111,7 @@ export async function exploreModel(molecules: readonly Molecule[], options: Expl
     }
   }
   const left = rows.filter((r) => !r.embedded).length;
-  const limitNote = left === 0 ? null : `${left} of ${rows.length} records are listed without figures: the page keeps its figures under ${(maxBytes / 1e6).toFixed(1)} MB (raise it with --max-size, or copy a shown record's command and change --record)`;
+  const limitNote = left === 0 ? null : `${left} of ${rows.length} records are listed without figures: the page keeps its figures under ${Number((maxBytes / 1e6).toPrecision(3))} MB (raise it with --max-size, or copy a shown record's command and change --record)`;
   return {
     schema: 'conformark/explore@1',
     file: options.file,
