@@ -68,7 +68,7 @@ describe('conformark explore', () => {
     const out = join(dir, 'small.html');
     const r = run('explore', W4, '--max-size', '0.01', '-o', out);
     expect(r.status).toBe(0);
-    expect(r.stderr).toMatch(/^conformark: 2 of 3 records are listed without figures: the page keeps its figures under 0\.01 MB/);
+    expect(r.stderr).toMatch(/^conformark: 2 of 3 records are listed without figures: the page stays under 0\.01 MB/);
     expect(readFileSync(out, 'utf8')).toContain('class="limit"');
   });
 

@@ -17,7 +17,7 @@ export interface Depiction {
 }
 
 /** Screen length of one bond, px. */
-const BOND_PX = 46;
+const BOND_PX = 50;
 const MARGIN_PX = 28;
 
 const SUBSCRIPT = '₀₁₂₃₄₅₆₇₈₉';

@@ -7,6 +7,8 @@ import { escapeHtml } from './escapeHtml.js';
 
 /** Gap between the two lines of a double bond, px. */
 const DOUBLE_GAP_PX = 4;
+/** Drawn size over the coordinates' size (the page shrinks a wide picture to its column). */
+const SHOWN_SCALE = 1.5;
 /** Distance of an atom's tag from the atom, px. */
 const TAG_PX = 15;
 
@@ -24,7 +26,7 @@ export function depictionSvg(d: Depiction): string {
     neighbours.get(b.b)?.push(b.a);
   }
   const parts: string[] = [];
-  parts.push(`<svg xmlns="http://www.w3.org/2000/svg" class="depiction" viewBox="0 0 ${n(d.width)} ${n(d.height)}" width="${n(d.width)}" height="${n(d.height)}" role="img" aria-label="2D structure: point at a bond or a ring">`);
+  parts.push(`<svg xmlns="http://www.w3.org/2000/svg" class="depiction" viewBox="0 0 ${n(d.width)} ${n(d.height)}" width="${n(d.width * SHOWN_SCALE)}" height="${n(d.height * SHOWN_SCALE)}" role="img" aria-label="2D structure: point at a bond or a ring">`);
   for (const r of d.rings) {
     const points = r.atoms.map((id) => at.get(id)).filter((a) => a !== undefined).map((a) => `${n(a.x)},${n(a.y)}`).join(' ');
     parts.push(`<polygon class="ring-hit" data-ring="${escapeHtml(r.key)}" tabindex="0" aria-label="ring of atoms ${escapeHtml(r.key)}" points="${points}"/>`);
@@ -46,7 +48,9 @@ export function depictionSvg(d: Depiction): string {
     let [dx, dy] = ns.reduce(([sx, sy], m) => [sx + (a.x - m.x), sy + (a.y - m.y)], [0, 0]);
     const len = Math.hypot(dx, dy);
     [dx, dy] = len > 1e-6 ? [dx / len, dy / len] : ns.length > 0 ? [-(ns[0]!.y - a.y) / Math.hypot(ns[0]!.x - a.x, ns[0]!.y - a.y), (ns[0]!.x - a.x) / Math.hypot(ns[0]!.x - a.x, ns[0]!.y - a.y)] : [0, -1];
-    const tag = `<text class="tag" x="${n(a.x + dx * TAG_PX)}" y="${n(a.y + dy * TAG_PX + 3.5)}">${escapeHtml(a.tag)}</text>`;
+    // a labelled atom's tag sits clear of its label (about two characters wide)
+    const r = a.label ? TAG_PX + 4 + 3 * Math.abs(dx) * Math.max(0, a.label.length - 1) : TAG_PX;
+    const tag = `<text class="tag" x="${n(a.x + dx * r)}" y="${n(a.y + dy * r + 3.5)}">${escapeHtml(a.tag)}</text>`;
     if (a.label) labels.push(`<circle class="label-bg" cx="${n(a.x)}" cy="${n(a.y)}" r="9"/><text class="atom" x="${n(a.x)}" y="${n(a.y + 5)}">${escapeHtml(a.label)}</text>`);
     labels.push(tag);
   }

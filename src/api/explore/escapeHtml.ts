@@ -9,10 +9,14 @@ export function escapeHtml(text: string): string {
 }
 
 /**
- * JSON that can sit inside `<script type="application/json">`: `<`, `>`, `&` and the two JavaScript line
- * separators are written as `\u` escapes, so no `</script>` or `<!--` can end or change the element.
- * @example scriptJson({ t: '</script>' }) // '{"t":"\\u003c/script\\u003e"}'
+ * JSON that can sit inside `<script type="application/json">`: every `</` is written `<\/` and every `<!` is
+ * written `\u003c!` (both read back as the same string), so no `</script>` or `<!--` can end or change the
+ * element; the two JavaScript line separators are escaped too. Nothing else, so embedded SVG stays compact.
+ * @example scriptJson({ t: '</script>' }) // '{"t":"<\\/script>"}'
  */
 export function scriptJson(value: unknown): string {
-  return JSON.stringify(value).replace(/[<>&\u2028\u2029]/g, (c) => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`);
+  return JSON.stringify(value)
+    .replaceAll('</', '<\\/')
+    .replaceAll('<!', '\\u003c!')
+    .replace(/[\u2028\u2029]/g, (c) => `\\u${c.charCodeAt(0).toString(16)}`);
 }

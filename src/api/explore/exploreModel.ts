@@ -12,17 +12,22 @@ import { chemicalNumbering } from '../../analysis/chemicalNumbering.js';
 import { ensembleOf } from '../ensemble/ensemble.js';
 import { prepareRecord, type PreparedRecord } from '../prepare.js';
 import { depiction, topologyKey, type Depiction } from './depiction.js';
+import { depictionSvg } from './depictionSvg.js';
+import { scriptJson } from './escapeHtml.js';
 import { descriptorText } from './descriptorText.js';
 import { exploreRecord, type ExploreBond, type ExploreRing } from './exploreRecord.js';
 
 /** Default size limit of the page, bytes. */
 export const EXPLORE_MAX_BYTES = 5_000_000;
 
+/** Bytes kept for the page's own markup, style and script (they measure about 30 kB). */
+const PAGE_RESERVE_BYTES = 64_000;
+
 /** Options of {@link exploreModel}. */
 export interface ExploreModelOptions {
   /** The input file as the user names it on a command line (goes into every copied command). Required. */
   readonly file: string;
-  /** Size limit for the embedded figures and tables, bytes. Default {@link EXPLORE_MAX_BYTES}. */
+  /** Size limit of the whole page, bytes: records get figures in list order while the page stays under it. Default {@link EXPLORE_MAX_BYTES}. */
   readonly maxBytes?: number;
   /** Temperature for populations, K. Default 298.15. */
   readonly temperatureK?: number;
@@ -80,13 +85,15 @@ export async function exploreModel(molecules: readonly Molecule[], options: Expl
   const pictureOf = new Map<string, number>();
   // 3. Rows, with figures until the size limit is reached (the first record always gets its figures).
   const rows: ExploreRow[] = [];
-  let used = 0;
+  let used = PAGE_RESERVE_BYTES;
   let full = false;
   for (const [i, p] of prepared.entries()) {
     const key = topologyKey(p.molecule);
     if (!pictureOf.has(key)) {
       pictureOf.set(key, depictions.length);
-      depictions.push(await depiction(p.molecule, p.graph, p.rings, chemicalNumbering(p.molecule, p.graph, p.rings).names));
+      const picture = await depiction(p.molecule, p.graph, p.rings, chemicalNumbering(p.molecule, p.graph, p.rings).names);
+      depictions.push(picture);
+      used += bytes(depictionSvg(picture));
     }
     const c = ensemble?.report.conformers[i];
     const record = p.molecule.source.index;
@@ -100,8 +107,10 @@ export async function exploreModel(molecules: readonly Molecule[], options: Expl
       shapes: (c?.rings ?? ringShapes(p)).map((r) => (r.descriptor ? `${r.shape} ${descriptorText(r.descriptor)}` : r.shape)),
       depiction: pictureOf.get(key)!,
     };
+    // every row is on the page; a record's figures and tables are added while the page stays under the limit
+    used += bytes(scriptJson({ ...base, embedded: false, bonds: [], rings: [] }));
     const detail = full ? null : exploreRecord(p, { file: options.file, record });
-    const size = detail ? JSON.stringify(detail).length : 0;
+    const size = detail ? bytes(scriptJson(detail)) : 0;
     if (detail && (rows.length === 0 || used + size <= maxBytes)) {
       used += size;
       rows.push({ ...base, embedded: true, ...detail });
@@ -111,7 +120,7 @@ export async function exploreModel(molecules: readonly Molecule[], options: Expl
     }
   }
   const left = rows.filter((r) => !r.embedded).length;
-  const limitNote = left === 0 ? null : `${left} of ${rows.length} records are listed without figures: the page keeps its figures under ${Number((maxBytes / 1e6).toPrecision(3))} MB (raise it with --max-size, or copy a shown record's command and change --record)`;
+  const limitNote = left === 0 ? null : `${left} of ${rows.length} records are listed without figures: the page stays under ${Number((maxBytes / 1e6).toPrecision(3))} MB (raise it with --max-size, or copy a shown record's command and change --record)`;
   return {
     schema: 'conformark/explore@1',
     file: options.file,
@@ -143,3 +152,4 @@ function ringShapes(p: PreparedRecord): { shape: string; descriptor: string | nu
 }
 
 const round = (x: number, digits: number) => Number(x.toFixed(digits));
+const bytes = (text: string) => Buffer.byteLength(text, 'utf8');

@@ -27,7 +27,7 @@ td.title { max-width: 8em; overflow: hidden; text-overflow: ellipsis; }
 .notes { color: var(--muted); font-size: 12px; padding-left: 18px; }
 .notes li.limit { color: var(--pick); }
 .depiction-box { position: relative; overflow: auto; }
-svg.depiction { display: block; margin: 0 auto; width: 100%; max-width: 620px; height: auto; }
+svg.depiction { display: block; margin: 0 auto; max-width: 100%; height: auto; }
 svg.depiction .bond { stroke: var(--ink); stroke-width: 1.6; stroke-linecap: round; }
 svg.depiction .bond.aromatic { stroke-dasharray: 5 2; }
 svg.depiction .label-bg { fill: #fff; }
@@ -51,6 +51,7 @@ button:disabled { opacity: .45; cursor: default; }
 #figure-box svg { max-width: 100%; height: auto; width: 320px; }
 #figure-box p { color: var(--muted); margin: 0; }
 .command { display: block; margin: 8px 0; padding: 6px 8px; background: var(--soft); border-radius: 4px; font: 12px/1.4 ui-monospace, "DejaVu Sans Mono", monospace; white-space: pre-wrap; word-break: break-all; }
+.command:empty { display: none; }
 #status { color: var(--accent); font-size: 12px; min-height: 1.4em; }
 #figure-table { font-size: 12.5px; }
 #figure-table th { white-space: normal; vertical-align: bottom; }
