@@ -152,7 +152,7 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
   const formStats = new TrajectoryStats({ stride, timestep: timestep?.value });
   const plots = new TrajectoryPlots(n, options.maxAmplitudeDeg ?? 60);
   const catOf = (form: number) => SHAPE_ORDER.indexOf(table.shapeOf(form) as (typeof SHAPE_ORDER)[number]);
-  const formCat = table.forms.map((_, i) => catOf(i));
+  const formCat = table.shapes.map((_, i) => catOf(i));
   const planarCat = catOf(PLANAR_FORM);
   const puckeredCat = catOf(PUCKERED_FORM);
   const csvDescriptor = table.descriptors.map((d) => (d === null ? '' : /[",]/.test(d) ? `"${d.replace(/"/g, '""')}"` : d));
@@ -200,7 +200,7 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
       if (!kernel.measure(c, ring, v) || !Number.isFinite(v.Q)) {
         throw frameIssue(path, frame, 'degenerate-ring', Number.isFinite(v.Q) ? 'has collinear ring atoms' : 'has non-finite ring atom coordinates');
       }
-      const form = table.classify(v.Q, v.q2, v.thetaDeg, v.phaseDeg);
+      const form = table.classify(v.Q, v.q2, v.thetaDeg, v.phaseDeg, kernel.displacements);
       const planar = form === PLANAR_FORM;
       if (planar) planarFrames++;
       const shape = table.shapeOf(form);
