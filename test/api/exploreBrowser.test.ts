@@ -56,6 +56,12 @@ describe.skipIf(!haveBrowser)('explore page in headless Chromium', () => {
 
   const visible = '.depiction-box:not([hidden])';
   const figureSvg = () => page.$eval('#figure-box', (el) => el.innerHTML);
+  /** The middle of a target on screen (a vertical bond's line has a zero-width box, which a locator calls invisible). */
+  const middle = (selector: string) =>
+    page.$eval(selector, (e) => {
+      const r = e.getBoundingClientRect();
+      return { x: r.x + r.width / 2, y: r.y + r.height / 2 };
+    });
 
   it('lists every record and marks every bond and ring of the first as a target', async () => {
     expect(await page.$$eval('#record-body tr', (rows) => rows.length)).toBe(model.rows.length);
@@ -69,14 +75,14 @@ describe.skipIf(!haveBrowser)('explore page in headless Chromium', () => {
     const row = model.rows[0]!;
     const ring = row.rings[0]!;
     const bond = row.bonds.find((b) => b.key === [ring.atoms[1]!, ring.atoms[2]!].sort((x, y) => x - y).join('-'))!;
-    const hit = page.locator(`${visible} .bond-hit[data-bond="${bond.key}"]`);
-    await hit.hover();
+    const at = await middle(`${visible} .bond-hit[data-bond="${bond.key}"]`);
+    await page.mouse.move(at.x, at.y);
     const tip = await page.$eval('#tip', (el) => ({ hidden: (el as HTMLElement).hidden, text: el.textContent ?? '' }));
     expect(tip.hidden).toBe(false);
     expect(tip.text).toContain(bond.name);
     const heavy = bond.torsions.find((t) => t.heavy)!;
     expect(tip.text).toContain(heavy.label);
-    await hit.click();
+    await page.mouse.click(at.x, at.y);
     const view = bond.views[0]!;
     expect(await page.$$eval('#figure-box svg.newman', (els) => els.length)).toBe(1);
     // the browser re-serialises the SVG; its data-atoms and text are those of the embedded bytes
@@ -131,8 +137,8 @@ describe.skipIf(!haveBrowser)('explore page in headless Chromium', () => {
   it('clicking a ring shows its chair with shape and substituents', async () => {
     const row = model.rows[3]!;
     const ring = row.rings[0]!;
-    const box = (await page.locator(`${visible} .ring-hit[data-ring="${ring.key}"]`).boundingBox())!;
-    await page.mouse.click(box.x + box.width / 2, box.y + box.height / 2);
+    const at = await middle(`${visible} .ring-hit[data-ring="${ring.key}"]`);
+    await page.mouse.click(at.x, at.y);
     expect(await page.$$eval('#figure-box svg.chair', (els) => els.length)).toBe(1);
     expect(await page.$eval('#figure-summary', (e) => e.textContent)).toContain(ring.shape);
     expect(await page.$eval('#command', (e) => e.textContent)).toBe(ring.figure!.command);

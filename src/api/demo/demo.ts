@@ -15,6 +15,7 @@ import { ensembleFile } from '../ensemble/ensemble.js';
 import { ensembleText } from '../ensemble/ensembleText.js';
 import { writeEnsembleFigures } from '../ensemble/ensembleFigures.js';
 import { batchFile } from '../batch/batch.js';
+import { exploreFile } from '../explore/exploreFile.js';
 import { jsonText } from '../jsonText.js';
 import { inspectFile } from '../inspect/inspect.js';
 import { inspectText } from '../inspect/inspectText.js';
@@ -81,6 +82,7 @@ export async function renderDemo(options: DemoOptions = {}): Promise<DemoResult>
   writeAtomic(out('w2-ensemble.txt'), ensembleText(ensemble.report));
   writeAtomic(out('w2-ensemble.json'), jsonText(ensemble.report));
   const [sheet, ladder] = writeEnsembleFigures(ensemble, outDir, { idPrefix: 'w2e-' });
+  writeAtomic(out('w2-explore.html'), (await exploreFile(w2)).html);
   sections.push({
     id: 'w2',
     title: 'W2 · trans-2-methylcyclohexan-1-ol',
@@ -96,6 +98,7 @@ export async function renderDemo(options: DemoOptions = {}): Promise<DemoResult>
     links: [
       { file: 'w2-ensemble.txt', label: 'ranked table (text)' },
       { file: 'w2-ensemble.json', label: 'ensemble report (conformark/ensemble@1)' },
+      { file: 'w2-explore.html', label: 'explorer page (conformark explore): point at any bond or ring of any conformer' },
     ],
   });
 

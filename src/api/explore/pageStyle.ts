@@ -20,7 +20,7 @@ td.num, th.num { text-align: right; }
 #record-table tbody tr:hover { background: var(--soft); }
 #record-table tbody tr[aria-selected="true"] { background: #dcecf4; }
 #record-table tbody tr.summarised td { color: var(--muted); }
-td.shapes { white-space: normal; min-width: 7em; }
+td.shapes { white-space: nowrap; }
 td.title { max-width: 8em; overflow: hidden; text-overflow: ellipsis; }
 #record-table { font-size: 13px; }
 .records-scroll { max-height: 60vh; overflow: auto; border: 1px solid var(--line); }
