@@ -264,7 +264,7 @@ export type { ExploreOptions, ExploreResult } from './api/explore/exploreFile.js
 export { exploreModel, EXPLORE_MAX_BYTES } from './api/explore/exploreModel.js';
 export type { ExploreModel, ExploreModelOptions, ExploreRow } from './api/explore/exploreModel.js';
 export { exploreRecord } from './api/explore/exploreRecord.js';
-export type { ExploreBond, ExploreRing, ExploreTorsion, ExploreFigure, ExploreRecordDetail, ExploreRecordOptions } from './api/explore/exploreRecord.js';
+export type { ExploreBond, ExploreRing, ExploreTorsion, ExploreFigure, ExploreFigureOptions, ExploreRecordDetail, ExploreRecordOptions } from './api/explore/exploreRecord.js';
 export { explorePage } from './api/explore/explorePage.js';
 export type { ExplorePageOptions } from './api/explore/explorePage.js';
 export { figureCommand, shellWord } from './api/explore/exploreCommand.js';

@@ -58,6 +58,25 @@ describe('conformark explore', () => {
     }
   });
 
+  it('conformark explore --theme --angles --hydrogens draws every figure so, and the copied commands carry the flags', () => {
+    const out = join(dir, 'slides.html');
+    const r = run('explore', W4, '--theme', 'projector', '--angles', 'ideal', '--hydrogens', 'collapse', '-o', out);
+    expect(r.status).toBe(0);
+    const page = readFileSync(out, 'utf8');
+    const data = JSON.parse(/<script type="application\/json" id="explore-data">([\s\S]*?)<\/script>/.exec(page)![1]!) as ExploreModel;
+    const view = data.rows[0]!.bonds[0]!.views[0]!;
+    expect(view.command).toMatch(/ --theme projector --angles ideal --hydrogens collapse -o /);
+    expect(view.svg).toContain('theme-projector');
+    expect(runCopied(view.command)).toBe(view.svg);
+    const ring = data.rows[0]!.rings[0]!.figure!;
+    expect(ring.command).toMatch(/ --ring 1 --theme projector -o /);
+    expect(runCopied(ring.command)).toBe(ring.svg);
+    const bad = run('explore', W4, '--theme', 'nope', '-o', join(dir, 'nope.html'));
+    expect(bad.status).toBe(2);
+    expect(bad.stderr.trim().split('\n')).toHaveLength(1);
+    expect(existsSync(join(dir, 'nope.html'))).toBe(false);
+  });
+
   it('conformark explore FILE without -o writes the page to standard output', () => {
     const r = run('explore', W4, '--title', 'W4 <draft>');
     expect(r.status).toBe(0);

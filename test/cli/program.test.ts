@@ -22,7 +22,7 @@ describe('buildProgram', () => {
     expect(options('trajectory')).toEqual(expect.arrayContaining(['--ring', '--dir', '--stride', '--from', '--to', '--timestep', '--torsion']));
     expect(options('build')).toEqual(expect.arrayContaining(['--output', '--conformers', '--seed', '--ring-forms']));
     expect(options('demo')).toEqual(expect.arrayContaining(['--dir']));
-    expect(options('explore')).toEqual(expect.arrayContaining(['--output', '--title', '--max-size', '--temperature', '--energy-field', '--energy-unit']));
+    expect(options('explore')).toEqual(expect.arrayContaining(['--output', '--title', '--max-size', '--temperature', '--energy-field', '--energy-unit', '--theme', '--angles', '--hydrogens']));
   });
 });
 

@@ -15,7 +15,8 @@ import { depiction, topologyKey, type Depiction } from './depiction.js';
 import { depictionSvg } from './depictionSvg.js';
 import { scriptJson } from './escapeHtml.js';
 import { descriptorText } from './descriptorText.js';
-import { exploreRecord, type ExploreBond, type ExploreRing } from './exploreRecord.js';
+import { exploreRecord, type ExploreBond, type ExploreFigureOptions, type ExploreRing } from './exploreRecord.js';
+import { loadTheme } from '../../render/themes.js';
 
 /** Default size limit of the page, bytes. */
 export const EXPLORE_MAX_BYTES = 5_000_000;
@@ -33,6 +34,8 @@ export interface ExploreModelOptions {
   readonly temperatureK?: number;
   /** Energy field and unit (default as `ensemble`). */
   readonly energy?: EnergyOptions;
+  /** Theme, Newman angles and hydrogens for every figure (and its command). Defaults as `newman` and `chair`. */
+  readonly figures?: ExploreFigureOptions;
 }
 
 /** One record's row, with its bonds and rings when it is embedded. */
@@ -75,6 +78,8 @@ export interface ExploreModel {
  */
 export async function exploreModel(molecules: readonly Molecule[], options: ExploreModelOptions): Promise<ExploreModel> {
   const maxBytes = options.maxBytes ?? EXPLORE_MAX_BYTES;
+  // a bad theme is one usage error, not an error on every figure
+  if (options.figures?.theme !== undefined) loadTheme(options.figures.theme);
   // 1. Rank by energy when every record has one with a known unit; else keep file order.
   const ranked = rankable(molecules, options.energy);
   const ensemble = ranked ? ensembleOf(molecules, { temperatureK: options.temperatureK, energy: options.energy }) : null;
@@ -109,7 +114,7 @@ export async function exploreModel(molecules: readonly Molecule[], options: Expl
     };
     // every row is on the page; a record's figures and tables are added while the page stays under the limit
     used += bytes(scriptJson({ ...base, embedded: false, bonds: [], rings: [] }));
-    const detail = full ? null : exploreRecord(p, { file: options.file, record });
+    const detail = full ? null : exploreRecord(p, { file: options.file, record, figures: options.figures });
     const size = detail ? bytes(scriptJson(detail)) : 0;
     if (detail && (rows.length === 0 || used + size <= maxBytes)) {
       used += size;

@@ -76,6 +76,27 @@ export interface ExploreRecordOptions {
   readonly file: string;
   /** Record number in the file, from 1. */
   readonly record: number;
+  /** Figure options for every figure, as the CLI flags of the same names (each added to the commands when given). */
+  readonly figures?: ExploreFigureOptions;
+}
+
+/** Figure options the page's figures share (the CLI's `--theme`, `--angles`, `--hydrogens` of `newman`). */
+export interface ExploreFigureOptions {
+  /** Built-in theme name or theme file path, for Newman and ring figures. Default `column`. */
+  readonly theme?: string;
+  /** Newman bond angles: `true` (measured azimuths) or `ideal` (120° spacing). Default `true`. */
+  readonly angles?: 'true' | 'ideal';
+  /** Newman hydrogens: `show`, `hide` or `collapse`. Default `show`. */
+  readonly hydrogens?: 'show' | 'hide' | 'collapse';
+}
+
+/** The flags that give a command the same figure options. */
+function figureFlags(f: ExploreFigureOptions | undefined, kind: 'newman' | 'chair'): string[] {
+  return [
+    ...(f?.theme === undefined ? [] : ['--theme', f.theme]),
+    ...(kind === 'newman' && f?.angles !== undefined ? ['--angles', f.angles] : []),
+    ...(kind === 'newman' && f?.hydrogens !== undefined ? ['--hydrogens', f.hydrogens] : []),
+  ];
 }
 
 /** What {@link exploreRecord} returns. */
@@ -108,9 +129,9 @@ function exploreBond(prepared: PreparedRecord, options: ExploreRecordOptions, a:
   try {
     const views = ([[a, b], [b, a]] as const).map(([front, back]) => {
       // the same call, with the same defaults, as `conformark newman FILE --record N --bond F-B -o FILE.svg`
-      const figure = newmanFigure(mol, { bond: [front, back], graph, rings });
+      const figure = newmanFigure(mol, { bond: [front, back], graph, rings, theme: options.figures?.theme, angles: options.figures?.angles, hydrogens: options.figures?.hydrogens });
       const file = `newman-r${options.record}-${front + 1}-${back + 1}.svg`;
-      const command = figureCommand({ file: options.file, record: options.record, kind: 'newman', flags: ['--bond', `${front + 1}-${back + 1}`], output: file });
+      const command = figureCommand({ file: options.file, record: options.record, kind: 'newman', flags: ['--bond', `${front + 1}-${back + 1}`, ...figureFlags(options.figures, 'newman')], output: file });
       return { front: front + 1, back: back + 1, svg: svgBytes(figure.svg), command, file, view: figure.view };
     });
     const view = views[0]!.view;
@@ -143,10 +164,10 @@ function exploreRing(prepared: PreparedRecord, options: ExploreRecordOptions, k:
   let error: string | null = null;
   try {
     // the same call as `conformark chair FILE --record N --ring K -o FILE.svg` (its defaults spelled out as the CLI does)
-    const drawn = chairFigure(mol, { graph, rings, ring: k + 1, ordered: false, hydrogens: 'stereo', labels: 'element', caption: true });
+    const drawn = chairFigure(mol, { graph, rings, ring: k + 1, ordered: false, hydrogens: 'stereo', labels: 'element', caption: true, theme: options.figures?.theme });
     ring = drawn.ring;
     const file = `chair-r${options.record}-ring${k + 1}.svg`;
-    const command = figureCommand({ file: options.file, record: options.record, kind: 'chair', flags: ['--ring', String(k + 1)], output: file });
+    const command = figureCommand({ file: options.file, record: options.record, kind: 'chair', flags: ['--ring', String(k + 1), ...figureFlags(options.figures, 'chair')], output: file });
     figure = { svg: svgBytes(drawn.svg), command, file, view: drawn.view };
   } catch (err) {
     error = userMessage(err);

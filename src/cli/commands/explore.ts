@@ -1,7 +1,7 @@
 /** `conformark explore FILE -o page.html`: one self-contained page to pick bonds and rings by pointing. */
 import type { Command } from 'commander';
-import { exploreFile, formatIssue, protectInput, writeAtomic } from '../../index.js';
-import { finiteNumber, limitsOf, printWarnings } from '../options.js';
+import { exploreFile, formatIssue, protectInput, writeAtomic, type NewmanAngles, type NewmanHydrogens } from '../../index.js';
+import { finiteNumber, limitsOf, oneOf, printWarnings } from '../options.js';
 
 interface ExploreFlags {
   output?: string;
@@ -10,6 +10,9 @@ interface ExploreFlags {
   temperature?: string;
   energyField?: string;
   energyUnit?: string;
+  theme?: string;
+  angles?: string;
+  hydrogens?: string;
 }
 
 /** Adds the `explore` command to the program. */
@@ -24,6 +27,9 @@ export function registerExplore(program: Command): void {
     .option('--temperature <K>', 'temperature for the populations, K (default 298.15)')
     .option('--energy-field <name>', 'SD field or XYZ key holding the energy (default: the first whose name contains "energy")')
     .option('--energy-unit <unit>', 'unit of the energies: kcal/mol, kJ/mol, hartree, eV (default: from the file; records without a known unit are listed in file order)')
+    .option('--theme <name|path>', 'theme of every figure: column, projector, contrast, or a theme .json file (default column)')
+    .option('--angles <mode>', 'Newman bond angles: true (measured) or ideal (120° spacing, measured torsions printed) (default true)')
+    .option('--hydrogens <mode>', 'Newman hydrogens: show, hide or collapse (default show)')
     .action(async (file: string, flags: ExploreFlags, command: Command) => {
       const { read, hold } = limitsOf(command);
       if (flags.output) protectInput(file);
@@ -32,6 +38,11 @@ export function registerExplore(program: Command): void {
         maxBytes: flags.maxSize === undefined ? undefined : finiteNumber('--max-size', flags.maxSize, 0.01, 1000) * 1e6,
         temperatureK: flags.temperature === undefined ? undefined : finiteNumber('--temperature', flags.temperature, 1e-6),
         energy: { field: flags.energyField, unit: flags.energyUnit },
+        figures: {
+          theme: flags.theme,
+          angles: flags.angles === undefined ? undefined : oneOf<NewmanAngles>('--angles', flags.angles, ['true', 'ideal'], 'true'),
+          hydrogens: flags.hydrogens === undefined ? undefined : oneOf<NewmanHydrogens>('--hydrogens', flags.hydrogens, ['show', 'hide', 'collapse'], 'show'),
+        },
         read,
         hold,
       });
