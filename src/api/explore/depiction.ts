@@ -31,7 +31,7 @@ export function topologyKey(mol: Molecule): string {
 
 /**
  * The 2D picture of a record. `names` gives the tag printed beside each atom (chemical numbering where the
- * record has one, else the atom's number in the file).
+ * record has one, else the atom's name in the file, else its number).
  * @example const d = await depiction(mol, graph, rings, names); d.bonds.length
  */
 export async function depiction(mol: Molecule, graph: Graph, rings: readonly (readonly number[])[], names: ReadonlyMap<number, string>): Promise<Depiction> {
@@ -59,8 +59,11 @@ export async function depiction(mol: Molecule, graph: Graph, rings: readonly (re
   const atoms = heavy.map((i, k) => {
     const element = mol.atoms[i]!.element;
     const h = hydrogens(i);
-    const label = element === 'C' ? '' : `${element}${h > 0 ? `H${sub(h)}` : ''}`;
-    return { id: i + 1, x: round(xs[k]! - minX + MARGIN_PX), y: round(ys[k]! - minY + MARGIN_PX), label, tag: names.get(i) ?? String(i + 1) };
+    // skeletal style: carbon unlabelled unless it stands alone
+    const alone = graph.neighbors[i]!.every((j) => mol.atoms[j]!.element === 'H');
+    const label = element === 'C' && !alone ? '' : `${element}${h > 0 ? `H${sub(h)}` : ''}`;
+    const tag = names.get(i) ?? mol.atoms[i]!.name ?? String(i + 1);
+    return { id: i + 1, x: round(xs[k]! - minX + MARGIN_PX), y: round(ys[k]! - minY + MARGIN_PX), label, tag };
   });
   const width = round(Math.max(...atoms.map((a) => a.x), 0) + MARGIN_PX);
   const height = round(Math.max(...atoms.map((a) => a.y), 0) + MARGIN_PX);

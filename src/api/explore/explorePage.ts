@@ -56,7 +56,7 @@ export function explorePage(model: ExploreModel, options: ExplorePageOptions = {
     '<div id="pictures">',
     ...depictions.map((d, k) => `<div class="depiction-box" data-depiction="${k}"${k === 0 ? '' : ' hidden'}>${depictionSvg(d)}</div>`),
     '</div>',
-    '<p class="hint">Point at a bond for its torsions, or inside a ring for its shape; click (or Tab and Enter) to draw it. Grey tags are the chemical numbering, or the atom number in the file.</p>',
+    '<p class="hint">Point at a bond for its torsions, or inside a ring for its shape; click (or Tab and Enter) to draw it. Grey tags are the chemical numbering, else the atom names or numbers of the file; a hover shows the atom numbers.</p>',
     '<div id="tip" role="tooltip" hidden></div>',
     '</section>',
     '<section id="figure" aria-label="figure">',

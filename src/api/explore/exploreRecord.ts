@@ -114,7 +114,8 @@ const round = (x: number | null, digits: number): number | null => (x === null |
 export function exploreRecord(prepared: PreparedRecord, options: ExploreRecordOptions): ExploreRecordDetail {
   const { molecule: mol, graph, rings } = prepared;
   const { names } = chemicalNumbering(mol, graph, rings);
-  const name = (i: number) => names.get(i) ?? `${mol.atoms[i]!.element}${i + 1}`;
+  // chemical numbering where there is one, else the file's atom name, else element and number
+  const name = (i: number) => names.get(i) ?? mol.atoms[i]!.name ?? `${mol.atoms[i]!.element}${i + 1}`;
   const analysed = rings.map((ring, k) => analyzeRing(mol, graph, ring, { id: k + 1 }));
   const pairs = figureBonds(mol, graph, analysed.map((r) => r.atoms), 'all');
   const bonds = pairs.map(([a, b]) => exploreBond(prepared, options, a, b, name));

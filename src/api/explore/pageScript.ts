@@ -202,7 +202,7 @@ export const PAGE_SCRIPT = String.raw`
     var r = rows[state.row], list = kind === 'bond' ? r.bonds : r.rings, item = list.filter(function (x) { return x.key === key; })[0];
     if (!item) return null;
     if (kind === 'ring') {
-      return 'ring ' + item.number + ': ' + item.name + '\n' + ringLine(item);
+      return 'ring ' + item.number + ': ' + item.name + ' (atoms ' + item.atoms.join('-') + ')\n' + ringLine(item);
     }
     var heavy = item.torsions.filter(function (t) { return t.heavy; });
     var lines = (heavy.length ? heavy : item.torsions).map(function (t) { return t.label + '  ' + deg(t.angleDeg) + (t.klynePrelog ? ' (' + t.klynePrelog + ')' : ''); });
