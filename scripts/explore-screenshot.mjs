@@ -1,7 +1,8 @@
 // Screenshot of the gallery's explorer page for the README: node scripts/explore-screenshot.mjs
 // Opens gallery/w2-explore.html (npm run demo makes it) in Debian's Chromium, points at the C1–C2 bond of the
 // second conformer and writes docs/explore-w2.png.
-import { existsSync, mkdtempSync, rmSync } from 'node:fs';
+import { existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { gunzipSync } from 'node:zlib';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { pathToFileURL } from 'node:url';
@@ -20,11 +21,14 @@ const browser = await chromium.launchPersistentContext(profile, {
 try {
   const tab = await browser.newPage();
   await tab.goto(pathToFileURL(page).href, { waitUntil: 'load' });
+  await tab.waitForSelector('body[data-shown]');
   await tab.click('#record-body tr[data-row="1"]');
-  const key = await tab.evaluate(() => {
-    const data = JSON.parse(document.getElementById('explore-data').textContent);
-    return data.rows[1].bonds.find((b) => b.name === 'C1–C2' || b.name === 'C2–C1').key;
-  });
+  // the bond's key from the page's data (each record's bonds and rings are packed: gzip, base64)
+  const html = readFileSync(page, 'utf8');
+  const data = JSON.parse(/<script type="application\/json" id="explore-data">([\s\S]*?)<\/script>/.exec(html)[1]);
+  await tab.waitForSelector(`body[data-shown="${data.rows[1].record}"]`);
+  const { bonds } = JSON.parse(gunzipSync(Buffer.from(data.rows[1].detail, 'base64')).toString('utf8'));
+  const key = bonds.find((b) => b.name === 'C1–C2' || b.name === 'C2–C1').key;
   // a vertical or horizontal line has a zero-width box, which the locator calls invisible: point at its middle
   const box = await tab.$eval(`.depiction-box:not([hidden]) .bond-hit[data-bond="${key}"]`, (e) => {
     const r = e.getBoundingClientRect();

@@ -18,8 +18,11 @@ import {
 } from '../../src/index.js';
 import { descriptorText } from '../../src/api/explore/descriptorText.js';
 import { escapeHtml, scriptJson } from '../../src/api/explore/escapeHtml.js';
+import { packDetail } from '../../src/api/explore/packDetail.js';
+import { depictionSvg } from '../../src/api/explore/depictionSvg.js';
 import { butane } from '../helpers/newmanMolecules.js';
 import { xmlProblems } from '../helpers/xmlWellFormed.js';
+import { explorePageData as pageData } from '../helpers/explorePageData.js';
 
 const W2 = 'examples/w2-methylcyclohexanol.sdf';
 const W3 = 'examples/w3-methyl-glucoside.sdf';
@@ -28,13 +31,6 @@ async function records(path: string): Promise<Molecule[]> {
   const out: Molecule[] = [];
   for await (const m of readRecords(path)) out.push(m);
   return out;
-}
-
-/** The JSON the page carries, read back the way the page's script reads it. */
-function pageData(html: string): Record<string, unknown> {
-  const m = /<script type="application\/json" id="explore-data">([\s\S]*?)<\/script>/.exec(html);
-  expect(m).not.toBeNull();
-  return JSON.parse(m![1]!) as Record<string, unknown>;
 }
 
 let w2: ExploreModel;
@@ -56,7 +52,7 @@ describe('exploreModel', () => {
       expect(row.relativeEnergy).toBeCloseTo(c.relativeEnergy, 3);
       expect(row.population).toBeCloseTo(c.population, 5);
       expect(row.duplicateOf).toBe(c.duplicateOf);
-      expect(row.shapes).toEqual(c.rings.map((g) => (g.descriptor ? `${g.shape} ${descriptorText(g.descriptor)}` : g.shape)));
+      expect(row.shapes).toEqual(c.rings.map((g) => (g.descriptor ? `${g.shape}\u00a0${descriptorText(g.descriptor)}` : g.shape)));
     });
     expect(w2.rows[0]!.relativeEnergy).toBe(0);
   });
@@ -113,8 +109,9 @@ describe('exploreModel', () => {
   });
 
   it('exploreModel keeps the first records within the size limit and lists the rest without figures, with a note', async () => {
-    const oneRecord = JSON.stringify({ bonds: w2.rows[0]!.bonds, rings: w2.rows[0]!.rings }).length;
-    const maxBytes = 64_000 + Math.round(oneRecord * 3.5);
+    // the page's reserve, the picture, ten rows, and about three and a half packed records
+    const packed = packDetail({ bonds: w2.rows[0]!.bonds, rings: w2.rows[0]!.rings }).length;
+    const maxBytes = 64_000 + Buffer.byteLength(depictionSvg(w2.depictions[0]!)) + 10 * 400 + Math.round(packed * 3.5);
     const small = await exploreModel(w2Records, { file: W2, maxBytes });
     expect(Buffer.byteLength(explorePage(small))).toBeLessThanOrEqual(maxBytes);
     const embedded = small.rows.filter((r) => r.embedded);
@@ -159,8 +156,10 @@ describe('explorePage', () => {
     expect(html).toMatch(/<meta http-equiv="Content-Security-Policy" content="default-src &#39;none&#39;;[^"]*script-src &#39;sha256-[A-Za-z0-9+/=]+&#39;/);
     expect(html).toContain('<div class="depiction-box" data-depiction="0"><svg');
     const data = pageData(html);
-    expect((data.rows as unknown[]).length).toBe(w2.rows.length);
+    expect(data.rows.length).toBe(w2.rows.length);
     expect(data).not.toHaveProperty('depictions');
+    // the packed records read back as the model's own
+    expect(data.rows.map((r) => ({ bonds: r.bonds, rings: r.rings }))).toEqual(w2.rows.map((r) => ({ bonds: r.bonds, rings: r.rings })));
   });
 
   it('explorePage escapes titles and file names in the HTML, and the JSON data cannot end its script element', async () => {
@@ -172,7 +171,7 @@ describe('explorePage', () => {
     // outside the JSON (script data, never parsed as markup) no tag from the input appears
     expect(html.replace(/<script type="application\/json" id="explore-data">[\s\S]*?<\/script>/, '')).not.toContain('<img');
     expect(html).toContain('&lt;/script&gt;&lt;img src=x onerror=alert(1)&gt; &amp; &quot;quotes&quot;');
-    const data = pageData(html) as { rows: { title: string; bonds: { views: { command: string }[] }[] }[] };
+    const data = pageData(html);
     expect(data.rows[0]!.title).toBe(nasty);
     expect(data.rows[0]!.bonds[0]!.views[0]!.command).toContain(`'a'\\''b </script>.sdf'`);
     // every depiction is well-formed XML

@@ -47,6 +47,8 @@ describe.skipIf(!haveBrowser)('explore page in headless Chromium', () => {
     page.on('pageerror', (e) => errors.push(e.message));
     page.on('request', (r) => requests.push(r.url()));
     await page.goto(pageUrl, { waitUntil: 'load' });
+    // records are unpacked when first shown; the page marks the one it shows
+    await page.waitForSelector(`body[data-shown="${model.rows[0]!.record}"]`);
   }, 120_000);
 
   afterAll(async () => {
@@ -111,6 +113,7 @@ describe.skipIf(!haveBrowser)('explore page in headless Chromium', () => {
     const key = await page.$eval(`${visible} .bond-hit.selected`, (e) => e.getAttribute('data-bond'));
     const target = model.rows[3]!;
     await page.click(`#record-body tr[data-row="3"]`);
+    await page.waitForSelector(`body[data-shown="${target.record}"]`);
     expect(await page.$eval(`${visible} .bond-hit.selected`, (e) => e.getAttribute('data-bond'))).toBe(key);
     const view = target.bonds.find((b) => b.key === key)!.views[0]!;
     expect(await page.$eval('#command', (e) => e.textContent)).toBe(view.command);

@@ -4,6 +4,7 @@ import { mkdtempSync, readFileSync, rmSync, existsSync, copyFileSync, readdirSyn
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { ExploreModel } from '../../src/index.js';
+import { explorePageData } from '../helpers/explorePageData.js';
 
 // runs the built binary: `npx tsc -p tsconfig.build.json` (or `npm test`) first
 const run = (...args: string[]) => spawnSync('node', ['bin/conformark.js', ...args], { encoding: 'utf8' });
@@ -18,8 +19,7 @@ beforeAll(() => {
   expect(r.stderr).toBe('');
   expect(r.status).toBe(0);
   html = readFileSync(join(dir, 'w4.html'), 'utf8');
-  const json = /<script type="application\/json" id="explore-data">([\s\S]*?)<\/script>/.exec(html)![1]!;
-  model = JSON.parse(json) as ExploreModel;
+  model = explorePageData(html);
 });
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
@@ -63,7 +63,7 @@ describe('conformark explore', () => {
     const r = run('explore', W4, '--theme', 'projector', '--angles', 'ideal', '--hydrogens', 'collapse', '-o', out);
     expect(r.status).toBe(0);
     const page = readFileSync(out, 'utf8');
-    const data = JSON.parse(/<script type="application\/json" id="explore-data">([\s\S]*?)<\/script>/.exec(page)![1]!) as ExploreModel;
+    const data = explorePageData(page);
     const view = data.rows[0]!.bonds[0]!.views[0]!;
     expect(view.command).toMatch(/ --theme projector --angles ideal --hydrogens collapse -o /);
     expect(view.svg).toContain('theme-projector');

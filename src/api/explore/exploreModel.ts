@@ -14,6 +14,7 @@ import { prepareRecord, type PreparedRecord } from '../prepare.js';
 import { depiction, topologyKey, type Depiction } from './depiction.js';
 import { depictionSvg } from './depictionSvg.js';
 import { scriptJson } from './escapeHtml.js';
+import { packDetail } from './packDetail.js';
 import { descriptorText } from './descriptorText.js';
 import { exploreRecord, type ExploreBond, type ExploreFigureOptions, type ExploreRing } from './exploreRecord.js';
 import { loadTheme } from '../../render/themes.js';
@@ -47,7 +48,7 @@ export interface ExploreRow {
   readonly relativeEnergy: number | null;
   readonly population: number | null;
   readonly duplicateOf: number | null;
-  /** Each ring's shape and descriptor, e.g. `chair ⁴C₁`. */
+  /** Each ring's shape and descriptor, joined by a no-break space, e.g. `chair ⁴C₁`. */
   readonly shapes: readonly string[];
   /** Index into `depictions`. */
   readonly depiction: number;
@@ -109,13 +110,14 @@ export async function exploreModel(molecules: readonly Molecule[], options: Expl
       relativeEnergy: c ? round(c.relativeEnergy, 4) : null,
       population: c ? round(c.population, 6) : null,
       duplicateOf: c?.duplicateOf ?? null,
-      shapes: (c?.rings ?? ringShapes(p)).map((r) => (r.descriptor ? `${r.shape} ${descriptorText(r.descriptor)}` : r.shape)),
+      shapes: (c?.rings ?? ringShapes(p)).map((r) => (r.descriptor ? `${r.shape}\u00a0${descriptorText(r.descriptor)}` : r.shape)),
       depiction: pictureOf.get(key)!,
     };
     // every row is on the page; a record's figures and tables are added while the page stays under the limit
     used += bytes(scriptJson({ ...base, embedded: false, bonds: [], rings: [] }));
     const detail = full ? null : exploreRecord(p, { file: options.file, record, figures: options.figures });
-    const size = detail ? bytes(scriptJson(detail)) : 0;
+    // measured as the page carries it (packed); a JSON string of base64 needs no escaping
+    const size = detail ? bytes(packDetail(detail)) + 12 : 0;
     if (detail && (rows.length === 0 || used + size <= maxBytes)) {
       used += size;
       rows.push({ ...base, embedded: true, ...detail });

@@ -9,6 +9,7 @@ import { depictionSvg } from './depictionSvg.js';
 import { escapeHtml, scriptJson } from './escapeHtml.js';
 import { PAGE_SCRIPT } from './pageScript.js';
 import { PAGE_STYLE } from './pageStyle.js';
+import { packDetail } from './packDetail.js';
 
 /** Options of {@link explorePage}. */
 export interface ExplorePageOptions {
@@ -22,7 +23,9 @@ export interface ExplorePageOptions {
  */
 export function explorePage(model: ExploreModel, options: ExplorePageOptions = {}): string {
   const title = options.title ?? `conformark explorer: ${model.file}`;
-  const { depictions, warnings: _warnings, ...data } = model;
+  const { depictions, warnings: _warnings, ...rest } = model;
+  // each record's bonds and rings travel packed (packDetail.ts); the rows keep what the record list shows
+  const data = { ...rest, rows: model.rows.map(({ bonds, rings, ...row }) => ({ ...row, detail: row.embedded ? packDetail({ bonds, rings }) : null })) };
   const scriptHash = createHash('sha256').update(PAGE_SCRIPT, 'utf8').digest('base64');
   const csp = `default-src 'none'; style-src 'unsafe-inline'; img-src data: blob:; script-src 'sha256-${scriptHash}'; base-uri 'none'; form-action 'none'`;
   const embedded = model.rows.filter((r) => r.embedded).length;

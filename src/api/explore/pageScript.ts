@@ -22,7 +22,7 @@ export const PAGE_SCRIPT = String.raw`
     { key: 'energy', label: 'E (kcal/mol)', num: true, ensemble: true, get: function (r) { return r.energy; }, show: function (r) { return fixed(r.energy, 2); } },
     { key: 'relativeEnergy', label: '\u0394E', num: true, ensemble: true, get: function (r) { return r.relativeEnergy; }, show: function (r) { return fixed(r.relativeEnergy, 2); } },
     { key: 'population', label: 'pop. %', num: true, ensemble: true, get: function (r) { return r.population; }, show: function (r) { return r.duplicateOf !== null ? 'dup. of ' + r.duplicateOf : fixed(r.population * 100, 1); } },
-    { key: 'shapes', label: 'rings', get: function (r) { return r.shapes.join('; '); } }
+    { key: 'shapes', label: 'rings', get: function (r) { return r.shapes.join('; '); }, show: function (r) { return r.shapes.join('; ').replace(/-/g, '\u2011'); } }
   ].filter(function (c) { return !c.ensemble || data.ensemble; });
 
   function order() {
@@ -141,7 +141,28 @@ export const PAGE_SCRIPT = String.raw`
     });
   }
 
-  function render() { renderRecords(); renderPicture(); renderFigure(); }
+  function render() {
+    renderRecords(); renderPicture(); renderFigure();
+    document.body.setAttribute('data-shown', String(rows[state.row].record));
+  }
+
+  // a record's bonds and rings are packed (gzip, base64) until it is first shown
+  function unpack(i) {
+    var r = rows[i];
+    if (r.bonds) return Promise.resolve(r);
+    if (!r.detail) { r.bonds = []; r.rings = []; return Promise.resolve(r); }
+    if (typeof DecompressionStream === 'undefined') return Promise.reject(new Error('this browser cannot unpack the page (no DecompressionStream)'));
+    var text = atob(r.detail), bytes = new Uint8Array(text.length);
+    for (var k = 0; k < text.length; k++) bytes[k] = text.charCodeAt(k);
+    var stream = new Blob([bytes]).stream().pipeThrough(new DecompressionStream('gzip'));
+    return new Response(stream).text().then(function (json) {
+      var d = JSON.parse(json);
+      r.bonds = d.bonds; r.rings = d.rings; r.detail = null;
+      return r;
+    });
+  }
+
+  function failed(err) { say('could not show the record: ' + (err && err.message ? err.message : String(err))); }
 
   function csv(t) {
     var q = function (c) { c = String(c); return /[",\n]/.test(c) ? '"' + c.replace(/"/g, '""') + '"' : c; };
@@ -199,7 +220,9 @@ export const PAGE_SCRIPT = String.raw`
   }
 
   function tipText(kind, key) {
-    var r = rows[state.row], list = kind === 'bond' ? r.bonds : r.rings, item = list.filter(function (x) { return x.key === key; })[0];
+    var r = rows[state.row];
+    if (!r.bonds) return null;
+    var list = kind === 'bond' ? r.bonds : r.rings, item = list.filter(function (x) { return x.key === key; })[0];
     if (!item) return null;
     if (kind === 'ring') {
       return 'ring ' + item.number + ': ' + item.name + ' (atoms ' + item.atoms.join('-') + ')\n' + ringLine(item);
@@ -237,7 +260,12 @@ export const PAGE_SCRIPT = String.raw`
     renderPicture(); renderFigure();
   }
 
-  function chooseRow(i) { state.row = i; render(); var r = document.querySelector('#record-body tr[data-row="' + i + '"]'); if (r) r.focus(); }
+  function chooseRow(i) {
+    unpack(i).then(function () {
+      state.row = i; render();
+      var r = document.querySelector('#record-body tr[data-row="' + i + '"]'); if (r) r.focus();
+    }, failed);
+  }
 
   var pictures = $('pictures');
   pictures.addEventListener('mouseover', showTip);
@@ -272,6 +300,7 @@ export const PAGE_SCRIPT = String.raw`
   $('copy-csv').addEventListener('click', function () { var t = tableRows(); if (t) copy(csv(t), 'table (CSV)'); });
   $('copy-command').addEventListener('click', function () { var f = currentFigure(); if (f) copy(f.command, 'command'); });
 
-  render();
+  renderRecords();
+  unpack(0).then(render, failed);
 })();
 `;

@@ -20,7 +20,8 @@ td.num, th.num { text-align: right; }
 #record-table tbody tr:hover { background: var(--soft); }
 #record-table tbody tr[aria-selected="true"] { background: #dcecf4; }
 #record-table tbody tr.summarised td { color: var(--muted); }
-td.shapes { white-space: nowrap; }
+td.shapes { white-space: normal; }
+#record-table th { white-space: normal; vertical-align: bottom; }
 td.title { max-width: 8em; overflow: hidden; text-overflow: ellipsis; }
 #record-table { font-size: 13px; }
 .records-scroll { max-height: 60vh; overflow: auto; border: 1px solid var(--line); }
