@@ -1,4 +1,4 @@
-/** Writes `summary.json` and the three trajectory figures (each in every requested format). */
+/** Writes `summary.json` and the three trajectory figures of each ring (each in every requested format). */
 import { jsonText } from '../jsonText.js';
 import type { OutputFolder } from '../../io/outputFolder.js';
 import { figureBytes, type FigureFormat } from '../figures/writeFigure.js';
@@ -12,7 +12,7 @@ import { layoutPseudorotationWheel } from '../../layout/plots/pseudorotationWhee
 import { layoutTimeSeries, type SeriesSpec } from '../../layout/plots/timeSeriesLayout.js';
 import { layoutOccupancy } from '../../layout/plots/occupancyLayout.js';
 import type { Timestep } from './timestep.js';
-import type { TrajectorySetup } from './trajectorySetup.js';
+import type { RingSetup } from './trajectorySetup.js';
 import { PHI_THETA_MIN, type TrajectoryPlots } from './trajectoryPlots.js';
 import { SHAPE_ORDER, withTrajectoryRoles } from './trajectoryTheme.js';
 
@@ -47,7 +47,7 @@ export function seriesSpecs(size: number, plots: TrajectoryPlots): SeriesSpec[] 
 }
 
 /** The scenes of a run: map (six- and five-rings only), time series, occupancy. */
-export function trajectoryScenes(summary: { occupancy: Record<string, number>; frames: { analysed: number } }, plots: TrajectoryPlots, setup: TrajectorySetup, theme: Theme, timestep: Timestep | null): Map<string, Scene> {
+export function trajectoryScenes(summary: { occupancy: Record<string, number>; frames: { analysed: number } }, plots: TrajectoryPlots, setup: RingSetup, theme: Theme, timestep: Timestep | null): Map<string, Scene> {
   const metrics = sceneMetrics(theme);
   const common = { metrics, measure: measureText, ringLabel: setup.label };
   const scenes = new Map<string, Scene>();
@@ -59,27 +59,33 @@ export function trajectoryScenes(summary: { occupancy: Record<string, number>; f
   return scenes;
 }
 
+/** What the figures of one ring need. */
+export interface RingFigures {
+  readonly summary: { occupancy: Record<string, number>; frames: { analysed: number } };
+  readonly plots: TrajectoryPlots;
+  readonly setup: RingSetup;
+  /** Added to the file names (`-CHX2`), '' for a single ring. */
+  readonly suffix: string;
+}
+
 /**
- * Writes every figure and then commits the folder with summary.json as its manifest (so the figures, the CSV
- * and the summary appear together); returns the paths written, relative to the folder.
+ * Writes every ring's figures and then commits the folder with summary.json as its manifest (so the figures,
+ * the CSV and the summary appear together); returns the paths written, relative to the folder.
  */
-export async function writeTrajectoryFiles(
-  folder: OutputFolder,
-  summary: { occupancy: Record<string, number>; frames: { analysed: number } },
-  plots: TrajectoryPlots,
-  setup: TrajectorySetup,
-  options: TrajectoryFigureOptions,
-): Promise<string[]> {
+export async function writeTrajectoryFiles(folder: OutputFolder, summary: object, rings: readonly RingFigures[], options: TrajectoryFigureOptions): Promise<string[]> {
   const files = ['summary.json'];
   const theme = withTrajectoryRoles(loadTheme(options.theme));
-  const figures: [string, string][] = [];
-  for (const [name, scene] of trajectoryScenes(summary, plots, setup, theme, options.timestep)) {
-    figures.push([name, renderSvg(scene, theme, { idPrefix: `${name}-` })]);
-  }
-  for (const [name, svg] of figures) {
-    for (const format of options.formats) {
-      folder.write(`${name}.${format}`, await figureBytes(svg, format, { dpi: options.dpi, maxPixels: options.maxPixels }));
-      files.push(`${name}.${format}`);
+  for (const ring of rings) {
+    const figures: [string, string][] = [];
+    for (const [name, scene] of trajectoryScenes(ring.summary, ring.plots, ring.setup, theme, options.timestep)) {
+      const file = `${name}${ring.suffix}`;
+      figures.push([file, renderSvg(scene, theme, { idPrefix: `${file}-` })]);
+    }
+    for (const [name, svg] of figures) {
+      for (const format of options.formats) {
+        folder.write(`${name}.${format}`, await figureBytes(svg, format, { dpi: options.dpi, maxPixels: options.maxPixels }));
+        files.push(`${name}.${format}`);
+      }
     }
   }
   folder.commit(jsonText({ ...summary, files: ['puckering.csv', ...files] }));
