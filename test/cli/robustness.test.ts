@@ -42,7 +42,6 @@ const CORPUS: readonly (readonly [string, string])[] = [
   ['no-count.xyz', "no-count.xyz:1: expected an atom count, found 'water'"],
   ['no-m-end.sdf', 'no-m-end.sdf:4: record ends before M  END'],
   ['not-a-number.xyz', "not-a-number.xyz:4: y coordinate 'abc' is not a number"],
-  ['one-bad-of-three.sdf', 'one-bad-of-three.sdf:20: bond 2 refers to atom 7, but the record has 3 atoms'],
   ['overlap.pdb', 'overlap.pdb:3: atoms A/HOH1/O (atom 1) and A/HOH1/H1 (atom 2) are 0.10 Å apart inside one residue, closer than 0.4 Å'],
   ['overlap.xyz', 'overlap.xyz:5: atoms 2 (H) and 3 (H) are 0.12 Å apart, closer than 0.4 Å'],
   ['short-line.xyz', "short-line.xyz:3: expected an element and x y z, found 'O 0.000 0.000'"],
@@ -84,13 +83,32 @@ function expectUntouched(folder: string, out: string): void {
 }
 
 describe('conformark on the bad-input corpus', () => {
-  it.each(CORPUS)('conformark inspect %s -o FILE prints one line, exits 2 and keeps FILE', async (file, message) => {
+  /** Files with a good record beside the bad one: inspect reports both and exits 1 (the bad one on stderr). */
+  const PARTLY_GOOD = new Set(['extra-atoms.xyz', 'wrong-count.xyz']);
+
+  it.each(CORPUS.filter(([f]) => !PARTLY_GOOD.has(f)))('conformark inspect %s -o FILE prints one line, exits 2 and keeps FILE', async (file, message) => {
     const { folder, out } = sentinelIn(file);
     const r = await cliInProcess(['inspect', `${BAD}/${file}`, '-o', out]);
     expect(r.stderr).toBe(`conformark: ${BAD}/${message}\n`);
     expect(r.status).toBe(2);
     expect(r.stdout).toBe('');
     expectUntouched(folder, out);
+  });
+
+  it.each(CORPUS.filter(([f]) => PARTLY_GOOD.has(f)))('conformark inspect %s -o FILE reports the good record, prints the bad one and exits 1', async (file, message) => {
+    const { out } = sentinelIn(file);
+    const r = await cliInProcess(['inspect', `${BAD}/${file}`, '-o', out]);
+    expect(r.stderr).toBe(`conformark: ${BAD}/${message}\n`);
+    expect(r.status).toBe(1);
+    expect(readFileSync(out, 'utf8')).toContain(`  error: ${BAD}/${message}\n`);
+  });
+
+  it('conformark inspect one-bad-of-three.sdf -o FILE writes the two good records, prints the bad one and exits 1', async () => {
+    const { out } = sentinelIn('one-bad-of-three.sdf');
+    const r = await cliInProcess(['inspect', `${BAD}/one-bad-of-three.sdf`, '-o', out]);
+    expect(r.stderr).toBe(`conformark: ${BAD}/one-bad-of-three.sdf:20: bond 2 refers to atom 7, but the record has 3 atoms\n`);
+    expect(r.status).toBe(1);
+    expect(readFileSync(out, 'utf8')).toContain(`record 2\n  error: ${BAD}/one-bad-of-three.sdf:20: bond 2 refers to atom 7`);
   });
 
   it.each(NEWMAN_CORPUS)('conformark newman %s --bond 1-2 -o FILE.svg prints the reader error and keeps FILE.svg', async (file) => {

@@ -25,7 +25,7 @@ import {
   type NewmanLabels,
   jsonText,
 } from '../../index.js';
-import { limitsOf, oneOf, printWarnings, wholeNumber, DPI_HELP, dpiOption } from '../options.js';
+import { limitsOf, ringScopeOf, oneOf, printWarnings, wholeNumber, DPI_HELP, dpiOption } from '../options.js';
 
 interface NewmanFlags {
   bond: string[];
@@ -80,7 +80,7 @@ export function registerNewman(program: Command): void {
     .action(async (file: string, flags: NewmanFlags, command: Command) => {
       if (flags.output || flags.dir) protectInput(file);
       const { read, maxPixels } = limitsOf(command);
-      const { molecule: mol, graph, rings } = prepareRecord(await readRecord(file, wholeNumber('--record', flags.record ?? '1'), read));
+      const { molecule: mol, graph, rings } = prepareRecord(await readRecord(file, wholeNumber('--record', flags.record ?? '1'), read), ringScopeOf(command));
       const bonds = flags.bond.flatMap((text) => bondListSelection(mol, graph, text));
       const several = bonds.length > 1;
       if (several && (flags.up !== undefined || flags.mark !== undefined)) {
