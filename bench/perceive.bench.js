@@ -104,3 +104,27 @@ const k10 = chainGraph(10_000);
 const k100 = chainGraph(100_000);
 check(findRings(k100).length === 99, 'chain should carry 99 rings');
 measure('findRings (chain with a ring every 1,000 atoms)', findRings, k10, k100);
+
+// rings: one fully fused simple cubic lattice (every ring a 4-ring), 1,000 and 10,648 atoms; each round of
+// candidates is short, so time grows about as atoms × rings / bonds (10.6× the atoms: goal ratio ≤ 40)
+function cubicGraph(n) {
+  const id = (x, y, z) => x + n * (y + n * z);
+  const bonds = [];
+  for (let z = 0; z < n; z++) for (let y = 0; y < n; y++) for (let x = 0; x < n; x++) {
+    if (x + 1 < n) bonds.push({ a: id(x, y, z), b: id(x + 1, y, z), order: 1, perceived: false });
+    if (y + 1 < n) bonds.push({ a: id(x, y, z), b: id(x, y + 1, z), order: 1, perceived: false });
+    if (z + 1 < n) bonds.push({ a: id(x, y, z), b: id(x, y, z + 1), order: 1, perceived: false });
+  }
+  return buildGraph(n ** 3, bonds);
+}
+{
+  const small = cubicGraph(10);
+  const large = cubicGraph(22);
+  const t0 = performance.now();
+  check(findRings(small).length === 1701, 'a 10-cube lattice has 1,701 independent rings');
+  const t1 = performance.now();
+  check(findRings(large).length === 19845, 'a 22-cube lattice has 19,845 independent rings');
+  const t2 = performance.now();
+  const ratio = (t2 - t1) / (t1 - t0);
+  console.log(`perceive: findRings (fused cubic lattice): 1,000 atoms ${(t1 - t0).toFixed(0)} ms, 10,648 atoms ${(t2 - t1).toFixed(0)} ms, ratio ${ratio.toFixed(1)} (goal ≤ 40) ${ratio <= 40 ? 'ok' : 'SLOW'}`);
+}

@@ -5,6 +5,7 @@
  * greedily, shortest first, keeping each cycle that is independent of those kept (Gaussian elimination over
  * GF(2) on bond bitsets).
  */
+import { usageError, type ConformarkError } from '../model/errors.js';
 import type { RingSystem } from './ringSystems.js';
 
 interface Candidate {
@@ -17,13 +18,25 @@ interface Candidate {
 }
 
 /**
+ * Most elimination work (32-bit word operations, candidates × basis rows touched) spent on one ring system
+ * before it is refused: far above any molecule (a 1,000-atom fused cage takes well under 1 % of it), and
+ * below the minutes and gigabytes a crystal-sized lattice would take.
+ */
+export const MAX_RING_WORK = 4e9;
+
+/**
  * The rings of a minimum cycle basis of `system`, each in cyclic bonded order (0-based atom indices).
  * There are `bonds − atoms + 1` of them. Among rings of equal size the choice is deterministic: rings whose
  * sorted atom lists come first lexicographically are preferred.
- * Work grows as atoms × independent rings of the system, which is small for molecular ring systems.
+ *
+ * Candidates are made in rounds of growing length (breadth-first trees cut at depth D give every Horton cycle
+ * of length ≤ 2D + 1), each round sorted and eliminated before the next: the same greedy order as making them
+ * all first, but a lattice of short rings never builds its long cycles. Elimination keeps one basis row per
+ * pivot bond, so a candidate meets only the rows of its own bonds. Work beyond `MAX_RING_WORK` stops with a
+ * `ring-system-too-large` error instead of running for minutes.
  * @example minimumCycleBasis(norbornaneSystem).map((r) => r.length) // [5, 5]
  */
-export function minimumCycleBasis(system: RingSystem): number[][] {
+export function minimumCycleBasis(system: RingSystem, maxWork: number = MAX_RING_WORK): number[][] {
   const { atoms, bonds } = system;
   const v = atoms.length;
   const rank = bonds.length - v + 1;
@@ -50,62 +63,85 @@ export function minimumCycleBasis(system: RingSystem): number[][] {
     return bits;
   };
 
-  const candidates = hortonCandidates(adjacency).map((cycle): Candidate => ({
-    cycle,
-    bits: bitsOf(cycle),
-    sorted: cycle.slice().sort((p, q) => p - q),
-  }));
-  candidates.sort(compareCandidates);
-
-  const basis: { bits: Uint32Array; pivot: number }[] = [];
+  // basis rows by pivot (the row's lowest bond); a row has no bond below its pivot
+  const rowOf = new Map<number, Uint32Array>();
   const chosen: number[][] = [];
-  for (const c of candidates) {
-    if (chosen.length === rank) break;
-    const reduced = c.bits.slice();
-    for (const row of basis) {
-      if (reduced[row.pivot >>> 5]! & (1 << (row.pivot & 31))) {
-        for (let w = 0; w < words; w++) reduced[w]! ^= row.bits[w]!;
+  let work = 0;
+  let done = 0; // candidates of at most this length are processed
+  for (let depth = 1; chosen.length < rank; depth = Math.min(v, depth * 2)) {
+    const longest = depth >= v ? Infinity : 2 * depth + 1;
+    const candidates = hortonCandidates(adjacency, depth, done, longest).map((cycle): Candidate => ({
+      cycle,
+      bits: bitsOf(cycle),
+      sorted: cycle.slice().sort((p, q) => p - q),
+    }));
+    candidates.sort(compareCandidates);
+    for (const c of candidates) {
+      if (chosen.length === rank) break;
+      const reduced = c.bits;
+      for (let pivot = lowestBit(reduced, 0); pivot >= 0; pivot = lowestBit(reduced, pivot >>> 5)) {
+        const row = rowOf.get(pivot);
+        if (row === undefined) {
+          rowOf.set(pivot, reduced);
+          chosen.push(c.cycle.map((i) => atoms[i]!));
+          break;
+        }
+        for (let w = pivot >>> 5; w < words; w++) reduced[w]! ^= row[w]!;
+        work += words - (pivot >>> 5);
+        if (work > maxWork) throw tooLarge(v, rank);
       }
     }
-    const pivot = lowestBit(reduced);
-    if (pivot < 0) continue;
-    basis.push({ bits: reduced, pivot });
-    chosen.push(c.cycle.map((i) => atoms[i]!));
+    if (longest === Infinity) break;
+    done = longest;
   }
   return chosen;
 }
 
+function tooLarge(atoms: number, rank: number): ConformarkError {
+  return usageError(
+    'ring-system-too-large',
+    `a fused ring system of ${atoms} atoms and ${rank} independent rings is too large for ring perception (a framework or lattice, not a molecule): give a fragment`,
+  );
+}
+
 /**
- * Horton's candidate cycles: from each root r, a breadth-first tree (neighbours in ascending order fixes one
- * shortest path to every atom); every non-tree bond (x, y) whose tree paths to r meet only at r closes the
- * cycle r → … → x → y → … → r.
+ * Horton's candidate cycles of length in (`shortest`, `longest`]: from each root r, a breadth-first tree cut
+ * at `depth` (neighbours in ascending order fix one shortest path to every atom); every non-tree bond (x, y)
+ * whose tree paths to r meet only at r closes the cycle r → … → x → y → … → r.
  */
-function hortonCandidates(adjacency: readonly (readonly number[])[]): number[][] {
+function hortonCandidates(adjacency: readonly (readonly number[])[], depth: number, shortest: number, longest: number): number[][] {
   const v = adjacency.length;
-  const parent = new Int32Array(v);
+  const parent = new Int32Array(v).fill(-2);
   const branch = new Int32Array(v);
+  const dist = new Int32Array(v);
   const order = new Int32Array(v);
   const out: number[][] = [];
   const seen = new Set<string>();
   for (let root = 0; root < v; root++) {
-    parent.fill(-2);
     parent[root] = -1;
     branch[root] = -1;
+    dist[root] = 0;
     order[0] = root;
     let tail = 1;
     for (let head = 0; head < tail; head++) {
       const x = order[head]!;
+      if (dist[x]! >= depth) continue;
       for (const y of adjacency[x]!) {
         if (parent[y] !== -2) continue;
         parent[y] = x;
         branch[y] = x === root ? y : branch[x]!;
+        dist[y] = dist[x]! + 1;
         order[tail++] = y;
       }
     }
-    for (let x = 0; x < v; x++) {
+    // in ascending atom order, as a scan of every atom would meet them
+    const ball = Array.from(order.subarray(0, tail)).sort((p, q) => p - q);
+    for (const x of ball) {
       for (const y of adjacency[x]!) {
-        if (y < x || parent[y] === x || parent[x] === y) continue;
+        if (y < x || parent[y] === -2 || parent[y] === x || parent[x] === y) continue;
         if (branch[x] === branch[y]) continue;
+        const length = dist[x]! + dist[y]! + 1;
+        if (length <= shortest || length > longest) continue;
         const cycle = pathToRoot(parent, x).reverse();
         for (let w = y; w !== root; w = parent[w]!) cycle.push(w);
         const key = cycleKey(cycle);
@@ -114,6 +150,7 @@ function hortonCandidates(adjacency: readonly (readonly number[])[]): number[][]
         out.push(cycle);
       }
     }
+    for (let k = 0; k < tail; k++) parent[order[k]!] = -2;
   }
   return out;
 }
@@ -170,8 +207,9 @@ function compareCandidates(p: Candidate, q: Candidate): number {
   return 0;
 }
 
-function lowestBit(bits: Uint32Array): number {
-  for (let w = 0; w < bits.length; w++) {
+/** The lowest set bit of `bits` at word `from` or above, or −1. */
+function lowestBit(bits: Uint32Array, from: number): number {
+  for (let w = from; w < bits.length; w++) {
     const word = bits[w]!;
     if (word !== 0) return w * 32 + (31 - Math.clz32(word & -word));
   }

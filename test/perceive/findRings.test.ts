@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { findRings, canonicalRing } from '../../src/perceive/findRings.js';
 import { ringSystems } from '../../src/perceive/ringSystems.js';
+import { minimumCycleBasis } from '../../src/perceive/minimumCycleBasis.js';
 import { buildGraph } from '../../src/perceive/graph.js';
 import { bondsOf } from './fixtures.js';
 import { allSimpleCycles, bondIndexOf, componentCount, cycleBits, greedyBasisSizes, rankOf } from './cycleSpace.js';
@@ -83,5 +84,34 @@ describe('findRings', () => {
       }),
       { seed: 20261203, numRuns: 400 },
     );
+  });
+});
+
+describe('findRings on large fused lattices', () => {
+  /** A simple cubic lattice of n × n × n atoms, bonds to the six axis neighbours: every ring is a 4-ring. */
+  const lattice = (n: number) => {
+    const id = (x: number, y: number, z: number) => x + n * (y + n * z);
+    const edges: [number, number][] = [];
+    for (let z = 0; z < n; z++) for (let y = 0; y < n; y++) for (let x = 0; x < n; x++) {
+      if (x + 1 < n) edges.push([id(x, y, z), id(x + 1, y, z)]);
+      if (y + 1 < n) edges.push([id(x, y, z), id(x, y + 1, z)]);
+      if (z + 1 < n) edges.push([id(x, y, z), id(x, y, z + 1)]);
+    }
+    return graphOf(n ** 3, edges);
+  };
+
+  it('findRings(8 × 8 × 8 cubic lattice) gives the E − V + 1 four-rings of an independent basis (built in rounds of growing length)', () => {
+    const graph = lattice(8);
+    const rings = findRings(graph);
+    expect(rings.length).toBe(3 * 8 * 8 * 7 - 512 + 1);
+    expect(rings.every((r) => r.length === 4)).toBe(true);
+    expectBasis(graph, rings);
+  });
+
+  it('minimumCycleBasis refuses a ring system over its work limit with ring-system-too-large, one clear line', () => {
+    const [system] = ringSystems(lattice(6));
+    expect(() => minimumCycleBasis(system!, 1000)).toThrow(expect.objectContaining({ code: 'ring-system-too-large' }));
+    expect(() => minimumCycleBasis(system!, 1000)).toThrow(/a fused ring system of 216 atoms and 325 independent rings is too large for ring perception/);
+    expect(minimumCycleBasis(system!)).toHaveLength(325);
   });
 });
