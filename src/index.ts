@@ -12,6 +12,7 @@ export { klynePrelog, torsionRelation } from './geometry/klynePrelog.js';
 export type { KlynePrelog, TorsionRelation } from './geometry/klynePrelog.js';
 export { wrap180, wrap360 } from './geometry/vec3.js';
 export { writeAtomic, protectInput } from './io/writeAtomic.js';
+export { abandonOutputs } from './io/abandonOutputs.js';
 export { buildGraph } from './perceive/graph.js';
 export type { Graph } from './perceive/graph.js';
 export {
@@ -127,7 +128,7 @@ export type { Legibility, LegibilityCounts, LegibilityOptions, LegibilityProblem
 export { textRuns, runsText, MIN_TEXT_SIZE } from './layout/text/textRuns.js';
 export { renderSvg } from './render/renderSvg.js';
 export type { RenderSvgOptions } from './render/renderSvg.js';
-export { renderPng, pngResolution, DEFAULT_DPI } from './render/renderPng.js';
+export { renderPng, pngResolution, DEFAULT_DPI, DEFAULT_MAX_PIXELS } from './render/renderPng.js';
 export type { RenderPngOptions } from './render/renderPng.js';
 export { renderPdf, svgSizePt } from './render/renderPdf.js';
 export { measureText } from './render/svgWindow.js';
@@ -157,7 +158,11 @@ export { isTrigonalAtom, isTrigonalRing, trigonalAtoms } from './perceive/trigon
 // shared record preparation (integrator)
 export { prepareRecord, readRecord } from './api/prepare.js';
 export { FLAT_INPUT_WARNING, isTwoDimensional } from './api/flatInput.js';
-export type { PreparedRecord } from './api/prepare.js';
+export type { PreparedRecord, PrepareOptions } from './api/prepare.js';
+export { DEFAULT_MAX_RING_SIZE, isCoordinationBond, ringClosingBonds, scopeRings } from './perceive/ringScope.js';
+export type { RingScopeOptions, SetAsideRing, SetAsideReason } from './perceive/ringScope.js';
+export { isMetal } from './model/elements.js';
+export { METAL_TOLERANCE_A } from './perceive/perceiveBonds.js';
 // inspect (integrator)
 export { inspectFile, inspectMolecule } from './api/inspect/inspect.js';
 export type { InspectOptions, InspectReport } from './api/inspect/inspect.js';

@@ -37,4 +37,19 @@ describe('renderDemo', () => {
       rmSync(dir, { recursive: true, force: true });
     }
   });
+
+  it('renderDemo refuses a corrupt marker or one listing a folder with one clear line, before writing anything', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'conformark-demo-'));
+    try {
+      mkdirSync(join(dir, 'photos'));
+      writeFileSync(join(dir, 'photos', 'a.jpg'), 'keep me');
+      writeFileSync(join(dir, '.conformark-demo.json'), '{"schema":"conformark/demo@1","files":["photos"]}');
+      await expect(renderDemo({ outDir: dir, examplesDir: 'examples' })).rejects.toThrow(/\.conformark-demo\.json: lists photos, which is a folder: refusing to write into this folder/);
+      writeFileSync(join(dir, '.conformark-demo.json'), 'not json');
+      await expect(renderDemo({ outDir: dir, examplesDir: 'examples' })).rejects.toThrow(/is not valid JSON/);
+      expect(walk(dir)).toEqual(['.conformark-demo.json', 'photos/a.jpg']);
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
+  });
 });

@@ -11,7 +11,7 @@ import type { RingAnalysis } from '../../analysis/ringAnalysis.js';
 import { grow, type Box } from '../text/labelPlacement.js';
 import { boxAt, textBox } from '../text/textBox.js';
 import { approximateMeasure, DEFAULT_METRICS, shiftItem, textStyle, type Scene, type SceneItem, type SceneMetrics, type SceneText, type TextMeasure, type TextRun, type TextStyle } from '../scene.js';
-import { ringCaption, ringDescription, ringTitle, type CaptionRun } from './ringCaption.js';
+import { fusedCaption, fusedDescription, fusedTitle, ringCaption, ringDescription, ringTitle, type CaptionRun } from './ringCaption.js';
 import { ringAtomLabel, ringVertexLabel, substituentLabel, type RingLabels } from './ringLabels.js';
 import { isTerminalDouble, type GroupContext } from '../text/groupLabel.js';
 import { runsBox } from '../text/textBox.js';
@@ -55,10 +55,12 @@ export function layoutRing(placement: RingPlacement, ring: RingAnalysis, mol: Mo
   const labelStyle = textStyle(metrics, 'atom-label');
   const locantStyle: TextStyle = metrics.text['ring-locant'] ?? { fontSize: labelStyle.fontSize * 0.72, fontWeight: 'normal' };
   // 1. Ring heteroatom symbols at their vertices; bonds stop short of them.
+  const rings = placement.rings ?? [ring];
+  const ringAtoms = [...new Set(rings.flatMap((r) => r.atoms))];
   const cut = new Map<number, number>();
   const fixed: SceneText[] = [];
   const fixedBoxes: Box[] = [];
-  for (const a of placement.ring) {
+  for (const a of ringAtoms) {
     const text = ringVertexLabel(mol, a);
     if (!text) continue;
     const t = textBox(text, labelStyle, measure);
@@ -92,14 +94,20 @@ export function layoutRing(placement: RingPlacement, ring: RingAnalysis, mol: Mo
     const expand = z === null || !zLabel ? {} : { expand: { atom: z, ...zLabel, double: isTerminalDouble(mol, graph, b.atoms[1], z) } };
     return [{ bond: order, atom: b.atoms[1], forward: group.forward, reversed: group.reversed, anchor: group.anchor, ...expand }];
   });
-  const ringPts = placement.ring.map(at);
-  const cx = ringPts.reduce((s, p) => s + p.x, 0) / ringPts.length;
-  const cy = ringPts.reduce((s, p) => s + p.y, 0) / ringPts.length;
-  const locants: LocantJob[] = placement.ring.flatMap((a, j) => {
-    const text = ringAtomLabel(mol, ring, j, labels, options.names);
-    if (!text) return [];
-    const p = at(a);
-    return [{ atom: a, text, at: p, azDeg: AZ(p.x - cx, p.y - cy), from: (cut.get(a) ?? 0) + metrics.gap }];
+  // locants outward from the centre of the first ring that holds them
+  const located = new Set<number>();
+  const locants: LocantJob[] = rings.flatMap((r) => {
+    const ringPts = r.atoms.map(at);
+    const cx = ringPts.reduce((t, p) => t + p.x, 0) / ringPts.length;
+    const cy = ringPts.reduce((t, p) => t + p.y, 0) / ringPts.length;
+    return r.atoms.flatMap((a, j) => {
+      if (located.has(a)) return [];
+      located.add(a);
+      const text = ringAtomLabel(mol, r, j, labels, options.names);
+      if (!text) return [];
+      const p = at(a);
+      return [{ atom: a, text, at: p, azDeg: AZ(p.x - cx, p.y - cy), from: (cut.get(a) ?? 0) + metrics.gap }];
+    });
   });
   const sizes = { gap: metrics.gap, lineWidth: metrics.lineWidth, label: labelStyle, locant: locantStyle, measure };
   let best: { items: SceneItem[]; texts: SceneText[]; boxes: Box[]; total: number } | undefined;
@@ -128,7 +136,7 @@ export function layoutRing(placement: RingPlacement, ring: RingAnalysis, mol: Mo
   }
   if (caption) {
     const capStyle = textStyle(metrics, 'caption');
-    const lines = ringCaption(ring);
+    const lines = placement.rings ? fusedCaption(placement.rings) : ringCaption(ring);
     const midX = (x0 + x1) / 2;
     let top = y1 + Math.max(metrics.gap * 2, capStyle.fontSize * 0.7);
     for (const runs of lines) {
@@ -146,8 +154,8 @@ export function layoutRing(placement: RingPlacement, ring: RingAnalysis, mol: Mo
     kind: placement.view === 'template' ? 'chair' : 'ring-projection',
     width: x1 - x0 + 2 * metrics.margin,
     height: y1 - y0 + 2 * metrics.margin,
-    title: ringTitle(ring, placement.view),
-    desc: ringDescription(ring, placement.view, placement.elevationDeg, element),
+    title: placement.rings ? fusedTitle(placement.rings) : ringTitle(ring, placement.view),
+    desc: placement.rings ? fusedDescription(placement.rings, element) : ringDescription(ring, placement.view, placement.elevationDeg, element),
     items: [...items, ...texts].map((it) => shiftItem(it, dx, dy)),
   };
 }
