@@ -38,7 +38,7 @@ const checked: Checked[] = records.flatMap((mol) => {
  * bond, read either way or go skeletal). Chair templates: the two acetylated sugars (an AcO / AcHN on C2 crowded by the axial H
  * on C1 and C5). Projected views: true projections, whose substituent bonds end on or near other bonds.
  */
-const NOT_YET_ZERO = { template: 4, projected: 217 };
+const NOT_YET_ZERO = { template: 4, projected: 196 };
 const count = (view: string) => checked.filter((c) => c.view === view).reduce((n, c) => n + c.problems.length, 0);
 const listed = (view: string) => checked.filter((c) => c.view === view && c.problems.length > 0).map((c) => `${c.figure}: ${c.problems.join('; ')}`);
 

@@ -5,7 +5,8 @@
  * than any other bond end. Long labels are placed first and H last (a lone H fits where a group does not).
  * When no position fits, a label tries the other reading direction on a steep bond (`OH` or `HO` both meet
  * the bond at the O when it comes from below or above) and then shortens its own bond (0.85, 0.7, 0.55 of
- * its length), never so far that the bond would stop on another [common practice, no source].
+ * its length), never so far that the bond would stop on another; a bond that as placed stops on another (a
+ * true projection) is shortened clear of it when it can be [common practice, no source].
  */
 import { grow, isFree, segmentCrossing, segmentHitsBox, type Box, type Obstacles } from '../text/labelPlacement.js';
 import { boxAt, runsBox, textBox, type TextBox } from '../text/textBox.js';
@@ -142,8 +143,8 @@ export function placeRingLabels(specs: readonly BondSpec[], subs: readonly Subst
       factors.set(spec.order, factor);
       const lines = allLines();
       const end = { x: spec.px + factor * dx, y: spec.py + factor * dy };
-      // a shortened bond must not stop on another bond
-      if (factor < 1 && stopsOnBond(end, lines, spec.atoms)) continue;
+      // a shortened bond must not stop on another bond; a full one that does gives way to a shorter one
+      if (stopsOnBond(end, lines, spec.atoms) && (factor < 1 || BOND_FACTORS.some((f) => f < 1 && !stopsOnBond({ x: spec.px + f * dx, y: spec.py + f * dy }, lines, spec.atoms)))) continue;
       const got = tryLabel(job.forward, job.reversed, job.anchor, end, dx, dy, job.atom, lines);
       if (got.clean) {
         add('atom-label', got.runs, got.box, got.t, label, job.atom);
