@@ -263,6 +263,18 @@ export type { DemoOptions, DemoResult } from './api/demo/demo.js';
 export { galleryPage } from './api/demo/galleryPage.js';
 export type { GalleryFigure, GalleryLink, GallerySection } from './api/demo/galleryPage.js';
 
+// explore: the self-contained explorer page
+export { exploreFile } from './api/explore/exploreFile.js';
+export type { ExploreOptions, ExploreResult } from './api/explore/exploreFile.js';
+export { exploreModel, EXPLORE_MAX_BYTES } from './api/explore/exploreModel.js';
+export type { ExploreModel, ExploreModelOptions, ExploreRow } from './api/explore/exploreModel.js';
+export { exploreRecord } from './api/explore/exploreRecord.js';
+export type { ExploreBond, ExploreRing, ExploreTorsion, ExploreFigure, ExploreFigureOptions, ExploreRecordDetail, ExploreRecordOptions } from './api/explore/exploreRecord.js';
+export { explorePage } from './api/explore/explorePage.js';
+export type { ExplorePageOptions } from './api/explore/explorePage.js';
+export { figureCommand, shellWord } from './api/explore/exploreCommand.js';
+export type { FigureCommand } from './api/explore/exploreCommand.js';
+
 // area J (robustness): file-system reasons in words
 export { fsReason, isSystemError } from './io/fsReason.js';
 export { safeText, sceneTextWarnings, MAX_LABEL_LENGTH, type SafeText } from './layout/text/safeText.js';

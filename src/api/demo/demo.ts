@@ -15,6 +15,7 @@ import { ensembleFile } from '../ensemble/ensemble.js';
 import { ensembleText } from '../ensemble/ensembleText.js';
 import { writeEnsembleFigures } from '../ensemble/ensembleFigures.js';
 import { batchFile } from '../batch/batch.js';
+import { exploreFile } from '../explore/exploreFile.js';
 import { jsonText } from '../jsonText.js';
 import { inspectFile } from '../inspect/inspect.js';
 import { inspectText } from '../inspect/inspectText.js';
@@ -91,6 +92,7 @@ async function demoInto(folder: OutputFolder, outDir: string, input: (name: stri
   write('w2-ensemble.txt', ensembleText(ensemble.report));
   write('w2-ensemble.json', jsonText(ensemble.report));
   const [sheet, ladder] = writeEnsembleFigures(ensemble, outDir, { idPrefix: 'w2e-', write: folder.writer });
+  write('w2-explore.html', (await exploreFile(w2)).html);
   sections.push({
     id: 'w2',
     title: 'W2 · trans-2-methylcyclohexan-1-ol',
@@ -106,6 +108,7 @@ async function demoInto(folder: OutputFolder, outDir: string, input: (name: stri
     links: [
       { file: 'w2-ensemble.txt', label: 'ranked table (text)' },
       { file: 'w2-ensemble.json', label: 'ensemble report (conformark/ensemble@1)' },
+      { file: 'w2-explore.html', label: 'explorer page (conformark explore): point at any bond or ring of any conformer' },
     ],
   });
 
