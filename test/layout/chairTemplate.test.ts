@@ -76,3 +76,42 @@ describe('chairTemplate (SVG read back by class and data-atoms)', () => {
     }
   });
 });
+
+describe('chairTemplate inner axial bonds and gaps (Scene read back)', () => {
+  const items = fig.scene.items.filter((it) => it.type === 'line');
+  const bonds = items.filter((l) => l.role !== 'bond-halo');
+  const halos = items.filter((l) => l.role === 'bond-halo');
+  const inner = fig.placement.bonds.filter((b) => b.front);
+
+  it('flags exactly the two axial bonds that point across the ring (up from a front vertex, down from a back one) as front', () => {
+    expect(inner).toHaveLength(2);
+    for (const b of inner) {
+      expect(b.role).toBe('axial');
+      const v = fig.placement.points.get(b.atoms[0])!;
+      const e = fig.placement.points.get(b.atoms[1])!;
+      expect(v.near > 0 ? e.y < v.y : e.y > v.y).toBe(true);
+    }
+  });
+
+  it('opens each gap under an inner axial bond, in the ring bond behind it, and never under a ring bond', () => {
+    expect(halos).toHaveLength(2);
+    for (const h of halos) expect(inner.some((b) => b.atoms.join() === h.atoms!.join())).toBe(true);
+    // the halo is drawn after the ring bond it cuts and before its own axial bond
+    const order = fig.scene.items;
+    for (const h of halos) {
+      const axial = order.findIndex((it) => it.type === 'line' && it.role === 'axial' && it.atoms!.join() === h.atoms!.join());
+      expect(order.indexOf(h)).toBe(axial - 1);
+    }
+  });
+
+  it('draws each inner axial bond past the far ring bond, its end clear of every bond it is not part of', () => {
+    for (const b of inner) {
+      const line = bonds.find((l) => l.role === 'axial' && l.atoms!.join() === b.atoms.join())!;
+      for (const other of bonds.filter((l) => !l.atoms!.some((a) => b.atoms.includes(a)))) {
+        const [dx, dy] = [other.x2 - other.x1, other.y2 - other.y1];
+        const t = Math.max(0, Math.min(1, ((line.x2 - other.x1) * dx + (line.y2 - other.y1) * dy) / (dx * dx + dy * dy)));
+        expect(Math.hypot(line.x2 - (other.x1 + t * dx), line.y2 - (other.y1 + t * dy))).toBeGreaterThan(1.2);
+      }
+    }
+  });
+});

@@ -8,7 +8,9 @@
  *   is a peak or a valley is the one that fits that atom);
  * - each substituent takes the slot its measured position names (axial or equatorial), an axial bond pointing
  *   to its measured face (top = up on the page).
- * Depth: front vertices are nearer than back ones, so bonds in front open gaps in the bonds they cross.
+ * Depth: front vertices are nearer than back ones, so bonds in front open gaps in the bonds they cross; the
+ * inner axial bonds (up from a front vertex, down from a back one) cross the far ring bond and are flagged
+ * `front`, so that ring bond gets the gap.
  */
 import type { Molecule } from '../../model/molecule.js';
 import { usageError } from '../../model/errors.js';
@@ -72,9 +74,13 @@ export function chairTemplate(ring: RingAnalysis, mol: Pick<Molecule, 'atoms'>, 
     const v = vertices[j]!;
     const slots = assignSlots(ring.substituents.filter((x) => x.ringAtom === atom));
     for (const x of drawn.filter((s) => s.ringAtom === atom)) {
-      const d = slotDirection(slots.get(x.atom)!, x, vertices, j);
+      const slot = slots.get(x.atom)!;
+      const d = slotDirection(slot, x, vertices, j);
       points.set(x.atom, { x: v.x + SUBSTITUENT_FRACTION * d.x, y: v.y + SUBSTITUENT_FRACTION * d.y, near: v.near });
-      bonds.push({ atoms: [atom, x.atom], role: x.position ?? 'substituent-bond' });
+      // an axial bond pointing across the ring (up from a front vertex, down from a back one) crosses the far
+      // ring bond: it is drawn in front, so the gap opens in the ring bond, not in the substituent
+      const inner = slot === 'axial' && ((v.near > 0 && d.y < 0) || (v.near < 0 && d.y > 0));
+      bonds.push({ atoms: [atom, x.atom], role: x.position ?? 'substituent-bond', ...(inner ? { front: true } : {}) });
     }
   });
   return { view: 'template', ring: ring.atoms, points, bonds, unitLength: 1 / TEMPLATE_BOND_FRACTION, elevationDeg: null, outline: kind };

@@ -19,6 +19,11 @@ export interface PlacedBond {
   readonly atoms: readonly [number, number];
   /** `ring-bond`, a substituent position word (`axial`, `pseudo-equatorial`…) or `substituent-bond`. */
   readonly role: string;
+  /**
+   * Drawn over every bond it crosses, so the gap opens in the ring bond behind it (the inner axial bonds of
+   * the chair template, which cross the far side of the ring). Default false.
+   */
+  readonly front?: boolean;
 }
 
 /** What a ring view places. */

@@ -56,6 +56,8 @@ export const boxDistance = (b: Box, p: Point): number => Math.hypot(Math.max(b.x
 export interface PickedLabel {
   readonly box: Box;
   readonly clean: boolean;
+  /** How far the box misses the two distance rules (0 when clean; Infinity when no candidate was free). */
+  readonly miss: number;
 }
 
 /**
@@ -69,9 +71,9 @@ export function pickBondLabel(candidates: readonly Box[], obstacles: Obstacles, 
     if (!isFree(grow(b, clearance), obstacles)) continue;
     const d = boxDistance(b, own);
     const nearestOther = others.reduce((m, p) => Math.min(m, boxDistance(b, p)), Infinity);
-    if (d <= maxGap && nearestOther > d) return { box: b, clean: true };
+    if (d <= maxGap && nearestOther > d) return { box: b, clean: true, miss: 0 };
     const miss = Math.max(0, d - maxGap) + 2 * Math.max(0, d - nearestOther + 0.25);
     if (!fallback || miss < fallback.miss) fallback = { box: b, miss };
   }
-  return { box: fallback?.box ?? candidates[candidates.length - 1]!, clean: false };
+  return { box: fallback?.box ?? candidates[candidates.length - 1]!, clean: false, miss: fallback?.miss ?? Infinity };
 }
