@@ -91,7 +91,7 @@ export async function renderDemo(options: DemoOptions = {}): Promise<DemoResult>
       { file: 'w2-chair-diaxial.svg', caption: 'The flipped chair (record 3): the same two groups now axial.' },
       { file: 'w2-twist-boat-projected.svg', caption: 'A twist-boat (record 5), drawn as the true orthographic view of its coordinates.' },
       { file: sheet!, caption: 'Ensemble sheet: every conformer in energy order with ΔE and Boltzmann population (298.15 K, from energies).' },
-      { file: ladder!, caption: 'Energy ladder of the ensemble, kcal/mol relative to the lowest conformer.' },
+      { file: ladder!, caption: 'Energy ladder of the ensemble: one column per ring form (chairs, twist-boats), kcal/mol above the lowest conformer; near-equal levels share one bracketed label.' },
     ],
     links: [
       { file: 'w2-ensemble.txt', label: 'ranked table (text)' },

@@ -8,7 +8,10 @@ import type { Theme } from '../../render/theme.js';
 import { loadTheme, sceneMetrics } from '../../render/themes.js';
 import { measureText } from '../../render/svgWindow.js';
 import { renderSvg } from '../../render/renderSvg.js';
-import { layoutEnergyLadder, percentText } from '../../layout/plots/energyLadder.js';
+import { layoutEnergyLadder, percentText, type LadderLevel, type LadderUnit } from '../../layout/plots/energyLadder.js';
+import type { TextRun } from '../../layout/scene.js';
+import { drawnRingForms } from './drawnRingForms.js';
+import type { DescriptorParts } from '../../analysis/ringDescriptor.js';
 import { figureBonds } from '../../analysis/figureBonds.js';
 import { writeAtomic } from '../../io/writeAtomic.js';
 import { canDraw, drawFigure, type FigureKind, type FigureTarget } from '../figures/figureKinds.js';
@@ -24,6 +27,24 @@ export interface EnsembleFigureOptions {
   readonly idPrefix?: string;
   /** Panels per sheet. Default 24. */
   readonly sheetSize?: number;
+  /** Energy unit of the ladder's axis and labels: `kcal/mol` or `kJ/mol`. Default `kcal/mol`. */
+  readonly ladderUnit?: LadderUnit;
+}
+
+/** A descriptor as runs: locants above as a raised run before the letter, those below lowered after it. */
+function descriptorRuns(parts: DescriptorParts): TextRun[] {
+  const runs: TextRun[] = [];
+  if (parts.above.length > 0) runs.push({ text: parts.above.join(','), shift: 'sup' });
+  runs.push({ text: parts.letter });
+  if (parts.below.length > 0) runs.push({ text: parts.below.join(','), shift: 'sub' });
+  return runs;
+}
+
+/** Ladder level of a conformer: its column is its ring forms (`chair`, `chair · boat`), its label carries the descriptors. */
+function ladderLevel(p: EnsembleResult['prepared'][number], c: EnsembleResult['report']['conformers'][number], label: string): LadderLevel {
+  const forms = drawnRingForms(p);
+  const descriptor = forms.flatMap((f, k) => (f.descriptor === null ? [] : [...(k > 0 ? [{ text: ' ' }] : []), ...descriptorRuns(f.descriptor)]));
+  return { label, relativeEnergy: c.relativeEnergy, population: c.population, form: forms.map((f) => f.shape).join(' · '), descriptor };
 }
 
 /** The panel drawn for a conformer, or `null` when it has neither a ring nor a bond to show. */
@@ -62,8 +83,8 @@ export function writeEnsembleFigures(result: EnsembleResult, dir: string, option
     writeAtomic(join(dir, file), `${svg}\n`);
     written.push(file);
   }
-  const levels = conformers.filter((c) => c.duplicateOf === null).map((c) => ({ label: label(c.record), relativeEnergy: c.relativeEnergy, population: c.population }));
-  const scene = layoutEnergyLadder(levels, { unit: result.report.unit, metrics: sceneMetrics(theme), measure: measureText });
+  const levels = conformers.flatMap((c, i) => (c.duplicateOf === null ? [ladderLevel(result.prepared[i]!, c, label(c.record))] : []));
+  const scene = layoutEnergyLadder(levels, { unit: options.ladderUnit, metrics: sceneMetrics(theme), measure: measureText });
   writeAtomic(join(dir, 'energy-ladder.svg'), `${renderSvg(scene, theme, { idPrefix: `${prefix}ladder-` })}\n`);
   written.push('energy-ladder.svg');
   return written;
