@@ -139,8 +139,10 @@ describe('ensembleFile', () => {
     const ladder = readFileSync(join(dir, 'energy-ladder.svg'), 'utf8');
     expect(xmlProblems(sheet)).toEqual([]);
     expect(xmlProblems(ladder)).toEqual([]);
-    const captions = [...sheet.matchAll(/class="panel-caption"[^>]*>([^<]*)</g)].map((m) => m[1]);
-    expect(captions.filter((c) => c!.startsWith('ΔE'))).toEqual(['ΔE 0.00 kcal/mol, 95.0 %', 'ΔE 1.74 kcal/mol, 5.0 %']);
+    // one row per conformer, lowest first, each headed by record, ring form, ΔE and population
+    expect([...sheet.matchAll(/class="row-heading"/g)]).toHaveLength(2);
+    expect(sheet.indexOf('ΔE 0.00 kcal/mol · 95.0 %')).toBeGreaterThan(0);
+    expect(sheet.indexOf('ΔE 1.74 kcal/mol · 5.0 %')).toBeGreaterThan(sheet.indexOf('ΔE 0.00 kcal/mol · 95.0 %'));
     expect(ladder).toContain('ΔE (kcal/mol)');
     expect([...ladder.matchAll(/class="level"/g)]).toHaveLength(2);
   });

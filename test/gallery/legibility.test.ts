@@ -16,7 +16,9 @@ const figures = walk('gallery').filter((f) => f.endsWith('.svg'));
 
 /** Problems still counted on these figures (chair labels crowded by the template's bonds, plot labels over marks). */
 const NOT_YET_ZERO: Record<string, number> = {
-  'ensemble-sheet-1.svg': 5,
+  // sheets: only their ring panels (the chair and projection drawings inside them) still count
+  'ensemble-sheet-2.svg': 3,
+  'ensemble-sheet-3.svg': 2,
   'w2-chair-diequatorial.svg': 2,
   'w2-twist-boat-projected.svg': 2,
   'w3-chair.svg': 7,
@@ -24,8 +26,7 @@ const NOT_YET_ZERO: Record<string, number> = {
   'w3-si/r02-ring1-chair.svg': 7,
   'w3-si/r03-ring1-chair.svg': 7,
   'w3-si/r04-ring1-chair.svg': 7,
-  'w3-si/sheet-1.svg': 21,
-  'w3-si/sheet-2.svg': 7,
+  'w3-si/sheet-1.svg': 28,
   'w4-ring-projected.svg': 1,
   'walk/occupancy.svg': 1,
   'walk/pucker-map.svg': 10,

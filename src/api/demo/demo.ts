@@ -80,7 +80,8 @@ export async function renderDemo(options: DemoOptions = {}): Promise<DemoResult>
   const ensemble = await ensembleFile(w2);
   writeAtomic(out('w2-ensemble.txt'), ensembleText(ensemble.report));
   writeAtomic(out('w2-ensemble.json'), jsonText(ensemble.report));
-  const [sheet, ladder] = writeEnsembleFigures(ensemble, outDir, { idPrefix: 'w2e-' });
+  const w2Figures = writeEnsembleFigures(ensemble, outDir, { idPrefix: 'w2e-' });
+  const w2Sheets = w2Figures.filter((f) => f.startsWith('ensemble-sheet-'));
   sections.push({
     id: 'w2',
     title: 'W2 · trans-2-methylcyclohexan-1-ol',
@@ -90,8 +91,8 @@ export async function renderDemo(options: DemoOptions = {}): Promise<DemoResult>
       { file: 'w2-chair-diequatorial.svg', caption: 'Lowest conformer: chair with OH and CH₃ both equatorial (template drawing placed from the measured displacements).' },
       { file: 'w2-chair-diaxial.svg', caption: 'The flipped chair (record 3): the same two groups now axial.' },
       { file: 'w2-twist-boat-projected.svg', caption: 'A twist-boat (record 5), drawn as the true orthographic view of its coordinates.' },
-      { file: sheet!, caption: 'Ensemble sheet: every conformer in energy order with ΔE and Boltzmann population (298.15 K, from energies).' },
-      { file: ladder!, caption: 'Energy ladder of the ensemble: one column per ring form (chairs, twist-boats), kcal/mol above the lowest conformer; near-equal levels share one bracketed label.' },
+      ...w2Sheets.map((file, k) => ({ file, caption: `Ensemble sheet ${k + 1} of ${w2Sheets.length}: one conformer per row in energy order (ring figure, then the informative Newman projections), with ΔE and Boltzmann population (298.15 K, from energies).` })),
+      { file: 'energy-ladder.svg', caption: 'Energy ladder of the ensemble: one column per ring form (chairs, twist-boats), kcal/mol above the lowest conformer; near-equal levels share one bracketed label.' },
     ],
     links: [
       { file: 'w2-ensemble.txt', label: 'ranked table (text)' },
