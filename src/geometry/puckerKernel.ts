@@ -57,6 +57,11 @@ export class PuckerKernel {
     }
   }
 
+  /** The displacements z (Å, ring order) of the last `measure`; overwritten by the next one. */
+  get displacements(): Float64Array {
+    return this.z;
+  }
+
   /**
    * Measures the ring whose atoms (0-based, in bonded order) are `ring` in the flat xyz array `coords`.
    * Returns false (and leaves `out` as NaN) for a degenerate ring (collinear atoms) or non-finite input.

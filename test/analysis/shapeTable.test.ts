@@ -3,6 +3,9 @@ import fc from 'fast-check';
 import { ShapeTable, PLANAR_FORM, PUCKERED_FORM } from '../../src/analysis/shapeTable.js';
 import { classifyRing } from '../../src/analysis/ringShape.js';
 import { cremerPople, displacementsFromModes, ringFromDisplacements, sixRingModes } from '../../src/geometry/cremerPople.js';
+import { PuckerKernel, PuckerValues } from '../../src/geometry/puckerKernel.js';
+import { readFileSync } from 'node:fs';
+import { parseText } from '../../src/io/parseText.js';
 
 const SIX = ['O', '1', '2', '3', '4', '5'];
 const FIVE = ['1', '2', '3', '4', '5'];
@@ -42,10 +45,47 @@ describe('ShapeTable', () => {
     expect(table.descriptorOf(table.classify(0.57, 0.01, 178, 0))).toBe('1C4');
   });
 
-  it('classify returns PLANAR_FORM below 0.1 Å and PUCKERED_FORM for other ring sizes', () => {
+  it('classify returns PLANAR_FORM below 0.1 Å, PUCKERED_FORM for a nine-ring and for a seven-ring without displacements', () => {
     expect(new ShapeTable(SIX).classify(0.05, 0.01, 50, 10)).toBe(PLANAR_FORM);
     const seven = new ShapeTable(['1', '2', '3', '4', '5', '6', '7']);
     expect(seven.classify(0.6, 0.3, NaN, 10)).toBe(PUCKERED_FORM);
     expect(seven.shapeOf(PUCKERED_FORM)).toBe('puckered');
+    const nine = new ShapeTable(['1', '2', '3', '4', '5', '6', '7', '8', '9']);
+    expect(nine.classify(0.6, 0.3, NaN, 10, new Float64Array(9).fill(0.2))).toBe(PUCKERED_FORM);
+  });
+
+  for (const n of [7, 8] as const) {
+    it(`classify with the kernel's displacements gives classifyRing's shape for ${n}-rings (fast-check, seed ${30 + n})`, () => {
+      const locants = Array.from({ length: n }, (_, i) => String(i + 1));
+      const table = new ShapeTable(locants);
+      const kernel = new PuckerKernel(n);
+      const v = new PuckerValues();
+      const ring = Int32Array.from(locants, (_, i) => i);
+      const modes = fc.tuple(...Array.from({ length: n === 7 ? 2 : 3 }, () => fc.tuple(fc.double({ min: 0, max: 0.6, noNaN: true }), fc.double({ min: 0, max: 359.99, noNaN: true }))));
+      fc.assert(
+        fc.property(modes, (qs) => {
+          const pts = ringFromDisplacements(displacementsFromModes(n, qs.map(([q, phaseDeg], k) => ({ m: k + 2, q, phaseDeg: k + 2 === n / 2 ? 0 : phaseDeg }))));
+          const pk = cremerPople(pts)!;
+          const ref = classifyRing(pk, locants);
+          expect(kernel.measure(Float64Array.from(pts.flat()), ring, v)).toBe(true);
+          const form = table.classify(v.Q, v.q2, v.thetaDeg, v.phaseDeg, kernel.displacements);
+          expect(table.shapeOf(form)).toBe(ref.shape);
+          expect(table.descriptorOf(form)).toBeNull();
+        }),
+        { seed: 30 + n, numRuns: 300 },
+      );
+    });
+  }
+
+  it('names the ideal seven-ring forms of test/data/medium-rings (scripts/fixtures/medium-ring-forms.mjs, derived)', () => {
+    const records = parseText(readFileSync('test/data/medium-rings/ideal-7.xyz', 'utf8'), { file: 'ideal-7.xyz' });
+    const table = new ShapeTable(['1', '2', '3', '4', '5', '6', '7']);
+    const kernel = new PuckerKernel(7);
+    const v = new PuckerValues();
+    const shapes = records.map((mol) => {
+      kernel.measure(Float64Array.from(mol.coords), Int32Array.from([0, 1, 2, 3, 4, 5, 6]), v);
+      return table.shapeOf(table.classify(v.Q, v.q2, v.thetaDeg, v.phaseDeg, kernel.displacements));
+    });
+    expect(shapes).toEqual(['chair', 'twist-chair', 'boat', 'twist-boat']);
   });
 });

@@ -46,6 +46,24 @@ beforeAll(() => {
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
 describe('analyzeTrajectory', () => {
+  it('analyzeTrajectory names seven- and eight-ring forms as inspect does (ideal forms and MMFF94s minima, docs/methods.md#medium-rings)', async () => {
+    const { parseText } = await import('../../src/io/parseText.js');
+    const { prepareRecord } = await import('../../src/api/prepare.js');
+    const { analyzeRing } = await import('../../src/analysis/ringAnalysis.js');
+    for (const name of ['ideal-7', 'mmff-8']) {
+      const text = readFileSync(`test/data/medium-rings/${name}.xyz`, 'utf8');
+      const single = parseText(text, { file: `${name}.xyz` }).map((mol) => {
+        const { molecule, graph, rings } = prepareRecord(mol);
+        return analyzeRing(molecule, graph, rings[0]!).shape;
+      });
+      expect(single.filter((s) => s === 'puckered')).toEqual([]);
+      writeFileSync(join(dir, `${name}.xyz`), text);
+      const out = join(dir, `medium-${name}`);
+      await analyzeTrajectory(join(dir, `${name}.xyz`), { dir: out, ring: '1' });
+      expect(csvRows(join(out, 'puckering.csv')).map((r) => r.shape)).toEqual(single);
+    }
+  });
+
   it('analyzeTrajectory(six-ring walk) recovers θ and φ of every frame within the noise (derived, inverse Cremer–Pople)', async () => {
     const out = join(dir, 'a');
     const s = await analyzeTrajectory(join(dir, 'six.xyz'), { dir: out, ring: '1', timestep: '2 ps', torsions: ['1-2-3-4'] });

@@ -28,6 +28,8 @@ export interface EnsembleFigureOptions {
   readonly sheetLayout?: SheetLayout;
   /** Energy unit of the ladder's axis and labels: `kcal/mol` or `kJ/mol`. Default `kcal/mol`. */
   readonly ladderUnit?: LadderUnit;
+  /** Writes one file (path, bytes). Default `writeAtomic`; a command that owns the folder stages through it. */
+  readonly write?: (path: string, data: string) => void;
 }
 
 type Prepared = EnsembleResult['prepared'][number];
@@ -50,6 +52,7 @@ export function writeEnsembleFigures(result: EnsembleResult, dir: string, option
   const { conformers } = result.report;
   const width = Math.max(2, String(conformers.reduce((m, c) => Math.max(m, c.record), 0)).length);
   const label = (n: number) => `r${String(n).padStart(width, '0')}`;
+  const write = options.write ?? writeAtomic;
   const written: string[] = [];
   const distinct = conformers.flatMap((c, i) => (c.duplicateOf === null ? [{ c, p: result.prepared[i]! }] : []));
   const forms = distinct.map(({ p }) => drawnRingForms(p));
@@ -73,7 +76,7 @@ export function writeEnsembleFigures(result: EnsembleResult, dir: string, option
   });
   sheets.forEach((svg, s) => {
     const file = `ensemble-sheet-${s + 1}.svg`;
-    writeAtomic(join(dir, file), `${svg}\n`);
+    write(join(dir, file), `${svg}\n`);
     written.push(file);
   });
 
@@ -84,7 +87,7 @@ export function writeEnsembleFigures(result: EnsembleResult, dir: string, option
     descriptor: forms[k]!.flatMap((f, j) => (f.descriptor ? [...(j > 0 ? [{ text: ' ' }] : []), ...descriptorTextRuns(f.descriptor)] : [])),
   }));
   const scene = layoutEnergyLadder(levels, { unit: options.ladderUnit, metrics: sceneMetrics(theme), measure: measureText });
-  writeAtomic(join(dir, 'energy-ladder.svg'), `${renderSvg(scene, theme, { idPrefix: `${prefix}ladder-` })}\n`);
+  write(join(dir, 'energy-ladder.svg'), `${renderSvg(scene, theme, { idPrefix: `${prefix}ladder-` })}\n`);
   written.push('energy-ladder.svg');
   return written;
 }

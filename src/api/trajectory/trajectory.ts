@@ -3,12 +3,12 @@
  * bonds, ring and numbering; each analysed frame then costs one Cremer–Pople kernel call, one shape lookup, a
  * CSV line and a few counters. Writes `puckering.csv`, `summary.json` and the figures into a folder.
  */
-import { resolve } from 'node:path';
 import { ConformarkError, ParseError, usageError, type Warning } from '../../model/errors.js';
 import type { FormatName } from '../../model/molecule.js';
 import type { Frame } from '../../io/readFrames.js';
 import type { ReadOptions } from '../../io/limits.js';
 import { protectInput } from '../../io/writeAtomic.js';
+import { OutputFolder, type ManifestKind } from '../../io/outputFolder.js';
 import { PHASE_THRESHOLD } from '../../geometry/cremerPople.js';
 import { PuckerValues } from '../../geometry/puckerKernel.js';
 import { torsionAt } from '../../geometry/torsionAt.js';
@@ -18,11 +18,11 @@ import { TrajectoryStats, type DwellStats } from '../../analysis/trajectoryStats
 import type { RingShapeOptions } from '../../analysis/ringShape.js';
 import type { FigureFormat } from '../figures/writeFigure.js';
 import type { Theme } from '../../render/theme.js';
-import { openTrajectory, type SourceFrame } from './trajectorySource.js';
+import { openTrajectory, type SourceFrame, type TrajectorySource } from './trajectorySource.js';
 import { TextStream } from './csvStream.js';
 import { TrajectoryRows } from './trajectoryRows.js';
 import { convertTime, parseStartTime, parseTimestep, type Timestep } from './timestep.js';
-import { trajectorySetup } from './trajectorySetup.js';
+import { trajectorySetup, type TrajectorySetup } from './trajectorySetup.js';
 import { FrameBoxes, parseBox, ringBondLimits } from './trajectoryBox.js';
 import { TrajectoryPlots } from './trajectoryPlots.js';
 import { SHAPE_ORDER } from './trajectoryTheme.js';
@@ -50,6 +50,8 @@ export interface TrajectoryOptions extends RingShapeOptions {
   readonly formats?: readonly FigureFormat[];
   /** PNG resolution, dots per inch. Default 300. */
   readonly dpi?: number;
+  /** Most pixels of one PNG figure. Default 64,000,000. */
+  readonly maxPixels?: number;
   /** Theme object, built-in name or path. Default `column`. */
   readonly theme?: Theme | string;
   /** Bond tolerance for perception on frame 1, Å. Default 0.40. */
@@ -98,6 +100,13 @@ export interface TrajectorySummary {
   readonly files: readonly string[];
 }
 
+/** How `summary.json` lists what a trajectory run wrote. */
+export const TRAJECTORY_MANIFEST: ManifestKind = {
+  name: 'summary.json',
+  schema: 'conformark/trajectory@1',
+  files: (doc) => (Array.isArray(doc.files) ? doc.files : [null]).filter((f) => f !== 'summary.json'),
+};
+
 function frameIssue(path: string, frame: Frame, code: string, message: string): ConformarkError {
   return new ConformarkError({ code, file: path, line: frame.line || null, message: `frame ${frame.index} ${message}` });
 }
@@ -132,18 +141,39 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
   if (to < from) throw usageError('bad-option', `--to ${to} is before --from ${from}`);
   const given = typeof options.timestep === 'string' ? parseTimestep(options.timestep) : options.timestep ?? null;
   protectInput(path);
+  if (options.topology !== undefined) protectInput(options.topology);
   // 2. Frame 1 fixes bonds, ring, numbering and torsions.
   const source = await openTrajectory(path, options.topology, options.read);
+  let folder: OutputFolder | null = null;
+  try {
+    const timestep: Timestep | null = given ?? (source.timestepPs !== null ? { value: +source.timestepPs.toPrecision(9), unit: 'ps' } : null);
+    const setup = trajectorySetup(source.first, { ...options, ring: options.ring ?? '1', torsions: options.torsions ?? [] });
+    folder = OutputFolder.open(options.dir, TRAJECTORY_MANIFEST);
+    return await analyseInto(folder, path, source, setup, { ...options, stride, from, to, timestep });
+  } catch (err) {
+    folder?.abort();
+    await source.frames.return?.(undefined);
+    throw err;
+  }
+}
+
+interface Resolved extends Omit<TrajectoryOptions, 'timestep'> {
+  readonly stride: number;
+  readonly from: number;
+  readonly to: number;
+  readonly timestep: Timestep | null;
+}
+
+async function analyseInto(folder: OutputFolder, path: string, source: TrajectorySource, setup: TrajectorySetup, options: Resolved): Promise<TrajectorySummary> {
+  const { stride, from, to, timestep } = options;
   const { first } = source;
-  const timestep: Timestep | null = given ?? (source.timestepPs !== null ? { value: +source.timestepPs.toPrecision(9), unit: 'ps' } : null);
-  const setup = trajectorySetup(first, { ...options, ring: options.ring ?? '1', torsions: options.torsions ?? [] });
   const { ring, kernel, table, torsions } = setup;
   const n = ring.length;
   const startGiven = typeof options.startTime === 'string' ? parseStartTime(options.startTime) : options.startTime ?? null;
   const start = !timestep ? 0 : startGiven ? convertTime(startGiven.value, startGiven.unit, timestep.unit) : source.startPs !== null ? convertTime(source.startPs, 'ps', timestep.unit) : 0;
   const maxRingAtom = Math.max(...ring, ...torsions.flat());
-  const dir = resolve(options.dir);
-  const csv = new TextStream(resolve(dir, 'puckering.csv'));
+  const csv = new TextStream(folder.path('puckering.csv'));
+  folder.adopt('puckering.csv', csv.temporary);
   const timeColumn = timestep ? [`time_${timestep.unit}`] : [];
   const fiveColumns = n === 5 ? ['P', 'tauM'] : [];
   csv.write(`${['frame', ...timeColumn, 'Q', 'thetaDeg', 'phiDeg', ...fiveColumns, 'shape', 'descriptor', ...setup.torsionColumns].join(',')}\n`);
@@ -152,7 +182,7 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
   const formStats = new TrajectoryStats({ stride, timestep: timestep?.value });
   const plots = new TrajectoryPlots(n, options.maxAmplitudeDeg ?? 60);
   const catOf = (form: number) => SHAPE_ORDER.indexOf(table.shapeOf(form) as (typeof SHAPE_ORDER)[number]);
-  const formCat = table.forms.map((_, i) => catOf(i));
+  const formCat = table.shapes.map((_, i) => catOf(i));
   const planarCat = catOf(PLANAR_FORM);
   const puckeredCat = catOf(PUCKERED_FORM);
   const csvDescriptor = table.descriptors.map((d) => (d === null ? '' : /[",]/.test(d) ? `"${d.replace(/"/g, '""')}"` : d));
@@ -200,7 +230,7 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
       if (!kernel.measure(c, ring, v) || !Number.isFinite(v.Q)) {
         throw frameIssue(path, frame, 'degenerate-ring', Number.isFinite(v.Q) ? 'has collinear ring atoms' : 'has non-finite ring atom coordinates');
       }
-      const form = table.classify(v.Q, v.q2, v.thetaDeg, v.phaseDeg);
+      const form = table.classify(v.Q, v.q2, v.thetaDeg, v.phaseDeg, kernel.displacements);
       const planar = form === PLANAR_FORM;
       if (planar) planarFrames++;
       const shape = table.shapeOf(form);
@@ -246,10 +276,9 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
       throw usageError('no-frames', `no frames to analyse ${range}: the file has ${read} frame${read === 1 ? '' : 's'}`, path);
     }
     rows.flush();
-    csv.commit();
+    csv.finish();
   } catch (err) {
     csv.abort();
-    await it.return?.(undefined);
     throw err;
   }
   // 4. Summary and figures.
@@ -274,6 +303,6 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
     torsions: setup.torsionColumns,
     warnings,
   };
-  const files = await writeTrajectoryFiles(dir, summary, plots, setup, { formats: options.formats ?? ['svg'], theme: options.theme, timestep, dpi: options.dpi });
+  const files = await writeTrajectoryFiles(folder, summary, plots, setup, { formats: options.formats ?? ['svg'], theme: options.theme, timestep, dpi: options.dpi, maxPixels: options.maxPixels });
   return { ...summary, files: ['puckering.csv', ...files] };
 }

@@ -1,8 +1,7 @@
 /** Writes `summary.json` and the three trajectory figures (each in every requested format). */
-import { join } from 'node:path';
 import { jsonText } from '../jsonText.js';
-import { writeAtomic } from '../../io/writeAtomic.js';
-import { writeFigure, type FigureFormat } from '../figures/writeFigure.js';
+import type { OutputFolder } from '../../io/outputFolder.js';
+import { figureBytes, type FigureFormat } from '../figures/writeFigure.js';
 import { loadTheme, sceneMetrics } from '../../render/themes.js';
 import { renderSvg } from '../../render/renderSvg.js';
 import { measureText } from '../../render/svgWindow.js';
@@ -24,6 +23,8 @@ export interface TrajectoryFigureOptions {
   readonly timestep: Timestep | null;
   /** PNG resolution, dots per inch. Default 300. */
   readonly dpi?: number;
+  /** Most pixels of one PNG. Default 64,000,000. */
+  readonly maxPixels?: number;
 }
 
 const angle = (label: string, max: number, step: number, wraps: boolean, extra: Partial<SeriesSpec> = {}): SeriesSpec => ({
@@ -58,9 +59,12 @@ export function trajectoryScenes(summary: { occupancy: Record<string, number>; f
   return scenes;
 }
 
-/** Writes summary.json and every figure; returns the paths written, relative to `dir`. */
+/**
+ * Writes every figure and then commits the folder with summary.json as its manifest (so the figures, the CSV
+ * and the summary appear together); returns the paths written, relative to the folder.
+ */
 export async function writeTrajectoryFiles(
-  dir: string,
+  folder: OutputFolder,
   summary: { occupancy: Record<string, number>; frames: { analysed: number } },
   plots: TrajectoryPlots,
   setup: TrajectorySetup,
@@ -74,10 +78,10 @@ export async function writeTrajectoryFiles(
   }
   for (const [name, svg] of figures) {
     for (const format of options.formats) {
-      await writeFigure(join(dir, `${name}.${format}`), svg, { format, dpi: options.dpi });
+      folder.write(`${name}.${format}`, await figureBytes(svg, format, { dpi: options.dpi, maxPixels: options.maxPixels }));
       files.push(`${name}.${format}`);
     }
   }
-  writeAtomic(join(dir, 'summary.json'), jsonText({ ...summary, files: ['puckering.csv', ...files] }));
+  folder.commit(jsonText({ ...summary, files: ['puckering.csv', ...files] }));
   return files;
 }

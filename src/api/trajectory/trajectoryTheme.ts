@@ -7,17 +7,23 @@ import type { RoleStyle, Theme } from '../../render/theme.js';
 import { DENSITY_LEVELS } from '../../layout/plots/densityShading.js';
 import { minimumOpacity } from '../../render/contrast.js';
 
-/** Ring shapes in a fixed order (bucket categories and colour order). */
-export const SHAPE_ORDER = ['chair', 'twist-boat', 'boat', 'half-chair', 'envelope', 'screw-boat', 'twist', 'planar', 'puckered'] as const;
+/** Ring shapes in a fixed order (bucket categories and colour order); the medium-ring forms come last. */
+export const SHAPE_ORDER = [
+  'chair', 'twist-boat', 'boat', 'half-chair', 'envelope', 'screw-boat', 'twist', 'planar', 'puckered',
+  'twist-chair', 'crown', 'boat-boat', 'boat-chair', 'twist-boat-chair', 'twist-chair-chair',
+] as const;
 
 /**
  * One colour per shape in SHAPE_ORDER: the Okabe & Ito (2008) colour-blind-safe palette, with its light members
  * (orange, pink, yellow, sky blue, grey) darkened along their hue until they reach 3:1 on white (WCAG 2.1
  * SC 1.4.11), since bars and swatches are graphics a reader needs.
  */
-const PALETTE = ['#0072B2', '#B27A00', '#009E73', '#C26A99', '#948A1E', '#D55E00', '#3089C8', '#767676', '#000000'];
-/** Opacities per shape when the theme draws in currentColor (no hue to spare). */
-const SHADES = [0.1, 0.32, 0.22, 0.45, 0.16, 0.55, 0.27, 0.05, 0.65];
+const PALETTE = ['#0072B2', '#B27A00', '#009E73', '#C26A99', '#948A1E', '#D55E00', '#3089C8', '#767676', '#000000',
+  // medium-ring forms reuse the colours of shapes their ring size never has, so one ring's shapes stay distinct:
+  // seven-rings chair, twist-boat, boat + twist-chair; eight-rings twist-boat + crown … twist-chair-chair
+  '#C26A99', '#C26A99', '#009E73', '#948A1E', '#D55E00', '#3089C8'];
+/** Opacities per shape when the theme draws in currentColor (no hue to spare), paired the same way. */
+const SHADES = [0.1, 0.32, 0.22, 0.45, 0.16, 0.55, 0.27, 0.05, 0.65, 0.45, 0.45, 0.22, 0.16, 0.55, 0.27];
 
 /**
  * The theme with the trajectory roles added where it has none.

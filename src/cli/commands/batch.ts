@@ -58,7 +58,7 @@ export function registerBatch(program: Command): void {
     .option('--energy-field <name>', 'SD field or XYZ key holding the energy (default: the first whose name contains "energy")')
     .option('--energy-unit <unit>', 'unit of the energies: kcal/mol, kJ/mol, hartree, eV (default: from the value, the field name or the file\'s convention; never guessed)')
     .action(async (file: string, flags: BatchFlags, command: Command) => {
-      const { read, hold } = limitsOf(command);
+      const { read, hold, maxPixels } = limitsOf(command);
       protectInput(file);
       const formats = flags.formats === undefined ? undefined : wordList<FigureFormat>('--formats', flags.formats, [...FIGURE_FORMATS.keys()]);
       const tables = flags.tables === undefined ? undefined : flags.tables.trim() === 'none' ? [] : wordList<TableFormat>('--tables', flags.tables, [...TABLE_FORMATS.keys()]);
@@ -70,7 +70,7 @@ export function registerBatch(program: Command): void {
         sheetLayout: oneOf('--sheet-layout', flags.sheetLayout, [...SHEET_LAYOUTS.keys()], 'page'),
         sheetNewmans: oneOf('--sheet-newmans', flags.sheetNewmans, SHEET_NEWMANS, 'informative'),
         energy: { field: flags.energyField, unit: flags.energyUnit },
-        read, hold,
+        read, hold, maxPixels,
         onProgress: bar
           ? (done, total) => {
               if (!started) bar.start(total, done);

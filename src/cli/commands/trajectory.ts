@@ -63,7 +63,7 @@ export function registerTrajectory(program: Command): void {
     .option('--theme <name|path>', 'column (print), projector (slides), contrast (colour-blind-safe), or a theme .json file (default column)')
     .action(async (file: string, flags: TrajectoryFlags, command: Command) => {
       protectInput(file);
-      const { read } = limitsOf(command);
+      const { read, maxPixels } = limitsOf(command);
       const bar = progress();
       try {
         const summary = await analyzeTrajectory(file, {
@@ -81,6 +81,7 @@ export function registerTrajectory(program: Command): void {
           theme: flags.theme,
           dpi: dpiOption(flags.dpi),
           read,
+          maxPixels,
           onProgress: (read) => bar.update(read),
         });
         bar.stop();
