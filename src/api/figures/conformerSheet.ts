@@ -1,6 +1,6 @@
 /**
  * Conformer sheets as SVG: a page 17 cm wide (fits a 17.8 cm two-column page; rows go onto further sheets
- * below 24 cm of height) or a 16:9 slide (33.867 × 19.05 cm, the common widescreen slide; use it with the
+ * below 24 cm of height) or a 16:9 slide (33.867 × 19.05 cm, 13.333 × 7.5 in, the common widescreen slide; use it with the
  * `projector` theme). Each panel's own SVG is nested at its place at its own size, so type keeps its print size.
  */
 import { layoutConformerSheets, type RowPanel, type SheetRow } from '../../layout/sheets/conformerSheet.js';
@@ -15,7 +15,7 @@ import { panelLetter } from '../../layout/sheets/contactSheet.js';
 /** Sheet formats: page size in cm and whether every sheet is exactly that size. */
 export const SHEET_LAYOUTS = new Map([
   ['page', { widthCm: 17, heightCm: 24, fixed: false }],
-  ['slide', { widthCm: 33.867, heightCm: 19.05, fixed: true }],
+  ['slide', { widthCm: 33.8667, heightCm: 19.05, fixed: true }],
 ] as const);
 export type SheetLayout = typeof SHEET_LAYOUTS extends Map<infer K, unknown> ? K : never;
 
