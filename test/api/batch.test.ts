@@ -67,15 +67,16 @@ describe('batchFile', () => {
   it('batchFile writes well-formed SVG, a complete manifest and the same bytes on a rerun', async () => {
     const a = temp();
     const b = temp();
-    await batchFile(input, a, { sheetSize: 24 });
-    await batchFile(input, b, { sheetSize: 24 });
+    await batchFile(input, a);
+    await batchFile(input, b);
     const manifest = readManifest(a);
     const listed = [...manifest.figures.map((f) => f.path), ...manifest.tables.map((t) => t.path)];
     const files = readdirSync(a).filter((f) => f !== 'manifest.json').sort();
     expect([...listed].sort()).toEqual(files);
     expect(new Set(listed).size).toBe(listed.length);
     const sheets = manifest.figures.filter((f) => f.kind === 'sheet');
-    expect(sheets.map((s) => s.path)).toEqual(['sheet-1.svg', 'sheet-2.svg', 'sheet-3.svg', 'sheet-4.svg']); // 77 panels, 24 a sheet
+    expect(sheets.length).toBeGreaterThan(1); // one row per record, rows onto further sheets below 24 cm
+    expect(sheets.map((s) => s.path)).toEqual(sheets.map((_, k) => `sheet-${k + 1}.svg`));
     for (const f of files.filter((x) => x.endsWith('.svg'))) {
       const svg = readFileSync(join(a, f), 'utf8');
       expect(xmlProblems(svg), f).toEqual([]);
@@ -85,17 +86,27 @@ describe('batchFile', () => {
     for (const f of [...files, 'manifest.json']) expect(readFileSync(join(b, f)).equals(readFileSync(join(a, f))), f).toBe(true);
   }, 120_000);
 
-  it('batchFile puts panel letters and captions with ΔE on the contact sheet', async () => {
+  it('batchFile puts one record per sheet row (ring figure first, informative Newmans), at most 17 cm wide', async () => {
     const dir = temp();
-    await batchFile(input, dir, { tables: [], sheetSize: 100 });
-    const sheet = readFileSync(join(dir, 'sheet-1.svg'), 'utf8');
-    const letters = [...sheet.matchAll(/class="panel-letter"[^>]*>([a-z]+)</g)].map((m) => m[1]);
-    expect(letters.slice(0, 3)).toEqual(['a', 'b', 'c']);
-    expect(letters).toHaveLength(7 * mols.length);
-    expect(letters.at(-1)).toBe('by'); // 77th panel: a…z, aa…az, ba…by
-    expect(sheet).toContain('ΔE 0.00 kcal/mol');
-    expect([...sheet.matchAll(/<svg x="/g)]).toHaveLength(7 * mols.length);
-    expect(readManifest(dir).tables).toEqual([]);
+    const { manifest } = await batchFile(input, dir, { tables: [] });
+    const sheets = manifest.figures.filter((f) => f.kind === 'sheet').map((f) => readFileSync(join(dir, f.path), 'utf8'));
+    const headings = sheets.flatMap((svg) => [...svg.matchAll(/class="row-heading"/g)]);
+    expect(headings).toHaveLength(mols.length);
+    for (const svg of sheets) {
+      const widthPt = Number(/^<svg[^>]*\swidth="([\d.]+)pt"/.exec(svg)![1]);
+      expect(widthPt).toBeLessThanOrEqual((17 / 2.54) * 72 + 0.01);
+      const panels = [...svg.matchAll(/<svg x="([\d.]+)" y="([\d.]+)"[^>]*class="panel conformark ([a-z-]+)/g)];
+      // rows: panels sharing a y; each starts with the ring figure and holds no second ring figure
+      const rows = new Map<string, string[]>();
+      for (const p of panels) rows.set(p[2]!, [...(rows.get(p[2]!) ?? []), p[3]!]);
+      expect(rows.size).toBe([...svg.matchAll(/class="row-heading"/g)].length);
+      for (const kinds of rows.values()) {
+        expect(kinds[0]).not.toBe('newman');
+        expect(kinds.slice(1).every((k) => k === 'newman')).toBe(true);
+        expect(kinds.length).toBeLessThan(7); // not all six ring bonds
+      }
+    }
+    expect(sheets[0]).toContain('ΔE 0.00 kcal/mol');
   }, 60_000);
 
   it('batchFile with --bonds rotatable draws the methyl-free bonds only, and a bond list draws those bonds', async () => {

@@ -8,7 +8,6 @@ import {
   ensembleText,
   formatSdf,
   isFreeEnergyField,
-  layoutEnergyLadder,
   prepareRecord,
   ringCouplings,
   isSkippedCoupling,
@@ -140,21 +139,11 @@ describe('ensembleFile', () => {
     const ladder = readFileSync(join(dir, 'energy-ladder.svg'), 'utf8');
     expect(xmlProblems(sheet)).toEqual([]);
     expect(xmlProblems(ladder)).toEqual([]);
-    const captions = [...sheet.matchAll(/class="panel-caption"[^>]*>([^<]*)</g)].map((m) => m[1]);
-    expect(captions.filter((c) => c!.startsWith('ΔE'))).toEqual(['ΔE 0.00 kcal/mol, 95.0 %', 'ΔE 1.74 kcal/mol, 5.0 %']);
+    // one row per conformer, lowest first, each headed by record, ring form, ΔE and population
+    expect([...sheet.matchAll(/class="row-heading"/g)]).toHaveLength(2);
+    expect(sheet.indexOf('ΔE 0.00 kcal/mol · 95.0 %')).toBeGreaterThan(0);
+    expect(sheet.indexOf('ΔE 1.74 kcal/mol · 5.0 %')).toBeGreaterThan(sheet.indexOf('ΔE 0.00 kcal/mol · 95.0 %'));
     expect(ladder).toContain('ΔE (kcal/mol)');
     expect([...ladder.matchAll(/class="level"/g)]).toHaveLength(2);
-  });
-});
-
-describe('layoutEnergyLadder', () => {
-  it('layoutEnergyLadder keeps labels of near-degenerate levels apart and each level at its energy', () => {
-    const scene = layoutEnergyLadder([0, 0.01, 0.02, 2].map((e, i) => ({ label: `r${i + 1}`, relativeEnergy: e, population: 0.25 })));
-    const labels = scene.items.filter((i) => i.role === 'level-label').map((i) => (i.type === 'text' ? i.y : 0));
-    const sorted = [...labels].sort((a, b) => a - b);
-    for (let k = 1; k < sorted.length; k++) expect(sorted[k]! - sorted[k - 1]!).toBeGreaterThanOrEqual(8);
-    const levels = scene.items.filter((i) => i.role === 'level').map((i) => (i.type === 'line' ? i.y1 : 0));
-    expect(levels[0]! - levels[3]!).toBeGreaterThan(0); // ΔE 2 is drawn above ΔE 0 (SVG y grows downwards)
-    expect(levels[0]! - levels[1]!).toBeCloseTo(((levels[0]! - levels[3]!) * 0.01) / 2, 6);
   });
 });

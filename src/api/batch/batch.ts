@@ -20,7 +20,10 @@ import { analyseRecord, recordLabel, type RecordAnalysis } from '../recordAnalys
 import { goodRecords, type RecordError } from '../recordStream.js';
 import { canDraw, type FigureKind } from '../figures/figureKinds.js';
 import { drawTasks, type FigureJob, type RecordTask } from './batchRender.js';
-import { contactSheet, type ContactPanel } from '../figures/contactSheet.js';
+import { conformerSheets, type ConformerPanel, type ConformerRow, type SheetLayout } from '../figures/conformerSheet.js';
+import { drawnRingForms } from '../figures/drawnRingForms.js';
+import { formRuns, headingRuns, INFORMATIVE_NOTE, sharedTitle, sheetTargets, type SheetTarget } from '../figures/sheetRows.js';
+import type { PreparedRecord } from '../prepare.js';
 import { figureBytes, type FigureFormat } from '../figures/writeFigure.js';
 import { supportTables } from '../tables/supportTables.js';
 import { TABLE_WRITERS, fixed, type TableFormat } from '../tables/tableText.js';
@@ -42,12 +45,16 @@ export interface BatchOptions {
   readonly theme?: Theme | string;
   /** Prefix before every figure's own id prefix (`<prefix>r01-newman-3-4-`). Default none. */
   readonly idPrefix?: string;
-  /** Write contact sheets. Default true. */
+  /** Write conformer sheets (one row per record). Default true. */
   readonly sheet?: boolean;
-  /** Panels per contact sheet; more figures make more sheets. Default 24. */
-  readonly sheetSize?: number;
-  /** Panels per sheet row. Default 4. */
-  readonly sheetColumns?: number;
+  /** Sheet format: `page` (17 cm wide, rows onto further sheets below 24 cm; default) or `slide` (16:9, 33.867 × 19.05 cm). */
+  readonly sheetLayout?: SheetLayout;
+  /**
+   * Newman projections on the sheets: `informative` (default: the ring bond with most heavy substituents per ring
+   * and exocyclic bonds to heavy groups, drawn for the sheet even when `bonds` does not write them as files) or
+   * `drawn` (every Newman figure written, e.g. every ring bond).
+   */
+  readonly sheetNewmans?: SheetNewmans;
   /** Table formats. Default `['csv', 'md', 'tex']`; `[]` writes none. */
   readonly tables?: readonly TableFormat[];
   /** Worker threads for figures. Default min(4, available cores); at most the available cores. 1 draws in this thread. */
@@ -90,12 +97,19 @@ export interface BatchResult {
   readonly notes: readonly string[];
 }
 
+/** Which Newman projections a sheet row shows. */
+export const SHEET_NEWMANS = ['informative', 'drawn'] as const;
+export type SheetNewmans = (typeof SHEET_NEWMANS)[number];
+
 interface Planned extends FigureJob {
   readonly record: number;
   readonly stem: string;
-  readonly caption: readonly string[];
   readonly manifestBond: [number, number] | null;
   readonly manifestRing: number | null;
+  /** Drawn for the sheet only, not written as a file. */
+  readonly sheetOnly?: boolean;
+  /** Name on the sheet (`C1–C2`, `ring`), for the sheet's note. */
+  readonly name?: string;
 }
 
 const one = (a: number) => a + 1;
@@ -108,24 +122,40 @@ export const BATCH_MANIFEST: ManifestKind = {
 };
 
 /** Figures of one record, in order: Newman per drawn bond, then one ring figure per ring. */
-function plan(a: RecordAnalysis, width: number, prefix: string, lowest: number | null, rings: boolean): Planned[] {
+function plan(a: RecordAnalysis, width: number, prefix: string, rings: boolean): Planned[] {
   const label = recordLabel(a.record, width);
-  const head = `${label} ${a.title}`.trim();
-  const tail = a.energy && lowest !== null ? [`ΔE ${fixed(a.energy.kcal - lowest, 2)} kcal/mol`] : [];
   const jobs: Planned[] = a.bonds.map(({ bond }) => {
     const stem = `${label}-newman-${one(bond[0])}-${one(bond[1])}`;
-    // the panel's own caption names the bond and its conformation
-    return { kind: 'newman', bond, idPrefix: `${prefix}${stem}-`, record: a.record, stem, caption: [head, ...tail], manifestBond: [one(bond[0]), one(bond[1])], manifestRing: null };
+    return { kind: 'newman', bond, idPrefix: `${prefix}${stem}-`, record: a.record, stem, manifestBond: [one(bond[0]), one(bond[1])], manifestRing: null };
   });
   if (rings) {
     a.rings.forEach((r, i) => {
       const stem = `${label}-ring${i + 1}-${r.shape}`;
-      // the panel's own caption gives shape, descriptor and puckering; name the ring when there are several
-      const caption = a.rings.length > 1 ? [head, `ring ${i + 1}`, ...tail] : [head, ...tail];
-      jobs.push({ kind: 'ring', ring: i, idPrefix: `${prefix}${stem}-`, record: a.record, stem, caption, manifestBond: null, manifestRing: i + 1 });
+      jobs.push({ kind: 'ring', ring: i, idPrefix: `${prefix}${stem}-`, record: a.record, stem, manifestBond: null, manifestRing: i + 1 });
     });
   }
   return jobs;
+}
+
+const sameBond = (x: readonly number[] | undefined, y: readonly number[] | undefined) =>
+  x !== undefined && y !== undefined && ((x[0] === y[0] && x[1] === y[1]) || (x[0] === y[1] && x[1] === y[0]));
+
+/**
+ * A record's sheet row as indices into its jobs, adding sheet-only jobs for the informative figures `bonds` did
+ * not draw. `drawn`: ring figures first, then every drawn Newman.
+ */
+function sheetRow(p: PreparedRecord, jobs: Planned[], mode: SheetNewmans, label: string, prefix: string): number[] {
+  const ringsFirst = (js: number[]) => [...js.filter((j) => jobs[j]!.kind === 'ring'), ...js.filter((j) => jobs[j]!.kind !== 'ring')];
+  if (mode === 'drawn') return ringsFirst(jobs.map((_, j) => j));
+  return sheetTargets(p).map((t: SheetTarget, n) => {
+    const found = jobs.findIndex((j) => j.kind === t.kind && (t.kind === 'ring' ? j.ring === t.target.ring : sameBond(j.bond, t.target.bond)));
+    if (found >= 0) {
+      jobs[found] = { ...jobs[found]!, name: t.name };
+      return found;
+    }
+    jobs.push({ kind: t.kind, bond: t.target.bond, ring: t.target.ring, idPrefix: `${prefix}${label}-sheet-${n + 1}-`, record: -1, stem: '', manifestBond: null, manifestRing: null, sheetOnly: true, name: t.name });
+    return jobs.length - 1;
+  });
 }
 
 /**
@@ -151,7 +181,7 @@ async function batchInto(folder: OutputFolder, path: string, theme: Theme, optio
   const warnings: { record: number; warning: Warning }[] = [];
 
   // 1. Read and analyse every record; a bad one becomes an error entry and the batch goes on.
-  const analysed: { molecule: Molecule; analysis: RecordAnalysis }[] = [];
+  const analysed: { molecule: Molecule; prepared: PreparedRecord; analysis: RecordAnalysis }[] = [];
   let refusal: ConformarkError | null = null;
   const flat = { warned: false };
   for await (const mol of goodRecords(path, options, errors)) {
@@ -160,7 +190,7 @@ async function batchInto(folder: OutputFolder, path: string, theme: Theme, optio
       const analysis = analyseRecord(prepared, { bonds: options.bonds, sp2Bonds: options.sp2Bonds, coupling: options.coupling, energy: options.energy });
       // captions and tables need a unit: refuse rather than guess (thrown past the per-record catch below)
       if (analysis.energyWithoutUnit !== null) refusal = usageError('energy-unit-unknown', `record ${analysis.record}: ${unitRequest(analysis.energyWithoutUnit)}`, path);
-      analysed.push({ molecule: prepared.molecule, analysis });
+      analysed.push({ molecule: prepared.molecule, prepared, analysis });
       for (const warning of withFlatInputWarning(mol, analysis.warnings, flat)) warnings.push({ record: analysis.record, warning });
     } catch (err) {
       if (!(err instanceof ConformarkError)) throw err;
@@ -183,7 +213,9 @@ async function batchInto(folder: OutputFolder, path: string, theme: Theme, optio
   if (spread) warnings.push({ record: analysed.filter((r) => r.analysis.energy).pop()!.analysis.record, warning: spread });
   const drawRings = canDraw('ring');
   if (!drawRings && analysed.some((r) => r.analysis.rings.length > 0)) notes.push('ring figures are not drawn: this build has no ring renderer');
-  const planned = analysed.map((r) => plan(r.analysis, width, prefix, lowest, drawRings));
+  const planned = analysed.map((r) => plan(r.analysis, width, prefix, drawRings));
+  const sheets = options.sheet !== false;
+  const rowJobs = sheets ? analysed.map((r, k) => sheetRow(r.prepared, planned[k]!, options.sheetNewmans ?? 'informative', recordLabel(r.analysis.record, width), prefix)) : [];
   const tasks: RecordTask[] = analysed.map((r, k) => ({ molecule: r.molecule, jobs: planned[k]!.map(({ kind, bond, ring, idPrefix }) => ({ kind, bond, ring, idPrefix })) }));
   const total = tasks.reduce((n, t) => n + t.jobs.length, 0);
 
@@ -198,26 +230,34 @@ async function batchInto(folder: OutputFolder, path: string, theme: Theme, optio
     options.onProgress?.(done, total);
   });
   const figures: ManifestFigure[] = [];
-  const panels: ContactPanel[] = [];
   planned.forEach((jobs, k) => {
     jobs.forEach((job, j) => {
+      if (job.sheetOnly) return;
       const fig = drawn[k]![j]!;
       for (const format of formats) {
         const file = `${job.stem}.${format}`;
         folder.write(file, format === 'svg' ? `${fig.svg}\n` : fig.files.find((f) => f.format === format)!.data);
         figures.push({ record: job.record, kind: job.kind, bond: job.manifestBond, ring: job.manifestRing, path: file });
       }
-      panels.push({ svg: fig.svg, width: fig.width, height: fig.height, caption: job.caption });
     });
   });
 
-  // 4. Contact sheets, `sheetSize` panels each.
-  if (options.sheet !== false && panels.length > 0) {
-    const size = options.sheetSize ?? 24;
-    for (let s = 0; s * size < panels.length; s++) {
-      const svg = contactSheet(panels.slice(s * size, (s + 1) * size), {
-        theme, idPrefix: `${prefix}sheet-${s + 1}-`, columns: options.sheetColumns, title: `Contact sheet ${s + 1} of ${path}`,
+  // 4. Conformer sheets: one row per record, the compound named once above the rows.
+  if (sheets && analysed.length > 0) {
+    const { header, rest } = sharedTitle(analysed.map((r) => r.analysis.title));
+    const rows: ConformerRow[] = analysed.flatMap((r, k) => {
+      const label = recordLabel(r.analysis.record, width);
+      const panels: ConformerPanel[] = rowJobs[k]!.map((j) => {
+        const fig = drawn[k]![j]!;
+        const job = planned[k]![j]!;
+        return { svg: fig.svg, width: fig.width, height: fig.height, name: job.name ?? (job.bond ? `${one(job.bond[0])}–${one(job.bond[1])}` : `ring ${(job.ring ?? 0) + 1}`) };
       });
+      const energy = r.analysis.energy && lowest !== null ? `ΔE ${fixed(r.analysis.energy.kcal - lowest, 2)} kcal/mol` : '';
+      return panels.length === 0 ? [] : [{ label, heading: headingRuns([label, rest[k]!, formRuns(drawnRingForms(r.prepared)), energy]), panels }];
+    });
+    const note = (options.sheetNewmans ?? 'informative') === 'informative' ? INFORMATIVE_NOTE : 'Each row: the ring figures, then every Newman projection written for the record.';
+    const svgs = conformerSheets(rows, { theme, layout: options.sheetLayout, idPrefix: `${prefix}sheet-`, header, note, title: `Conformer sheet of ${path}` });
+    for (const [s, svg] of svgs.entries()) {
       for (const format of formats) {
         const file = `sheet-${s + 1}.${format}`;
         folder.write(file, await figureBytes(svg, format, { dpi: options.dpi, maxPixels: options.maxPixels }));

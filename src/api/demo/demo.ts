@@ -91,7 +91,8 @@ async function demoInto(folder: OutputFolder, outDir: string, input: (name: stri
   const ensemble = await ensembleFile(w2);
   write('w2-ensemble.txt', ensembleText(ensemble.report));
   write('w2-ensemble.json', jsonText(ensemble.report));
-  const [sheet, ladder] = writeEnsembleFigures(ensemble, outDir, { idPrefix: 'w2e-', write: folder.writer });
+  const w2Figures = writeEnsembleFigures(ensemble, outDir, { idPrefix: 'w2e-', write: folder.writer });
+  const w2Sheets = w2Figures.filter((f) => f.startsWith('ensemble-sheet-'));
   write('w2-explore.html', (await exploreFile(w2)).html);
   sections.push({
     id: 'w2',
@@ -102,8 +103,8 @@ async function demoInto(folder: OutputFolder, outDir: string, input: (name: stri
       { file: 'w2-chair-diequatorial.svg', caption: 'Lowest conformer: chair with OH and CH₃ both equatorial (template drawing placed from the measured displacements).' },
       { file: 'w2-chair-diaxial.svg', caption: 'The flipped chair (record 3): the same two groups now axial.' },
       { file: 'w2-twist-boat-projected.svg', caption: 'A twist-boat (record 5), drawn as the true orthographic view of its coordinates.' },
-      { file: sheet!, caption: 'Ensemble sheet: every conformer in energy order with ΔE and Boltzmann population (298.15 K, from energies).' },
-      { file: ladder!, caption: 'Energy ladder of the ensemble, kcal/mol relative to the lowest conformer.' },
+      ...w2Sheets.map((file, k) => ({ file, caption: `Ensemble sheet ${k + 1} of ${w2Sheets.length}: one conformer per row in energy order (ring figure, then the informative Newman projections), with ΔE and Boltzmann population (298.15 K, from energies).` })),
+      { file: 'energy-ladder.svg', caption: 'Energy ladder of the ensemble: one column per ring form (chairs, twist-boats), kcal/mol above the lowest conformer; near-equal levels share one bracketed label.' },
     ],
     links: [
       { file: 'w2-ensemble.txt', label: 'ranked table (text)' },
@@ -128,7 +129,7 @@ async function demoInto(folder: OutputFolder, outDir: string, input: (name: stri
     figures: [
       { file: 'w3-chair.svg', caption: '⁴C₁ chair of the lowest conformer: every exocyclic heavy atom equatorial, every ring hydrogen axial.' },
       { file: 'w3-newman-c1-c2.svg', caption: 'Newman projection along C1–C2 in ideal 120° spacing, labelled with the measured torsions and the predicted H1–H2 coupling.' },
-      ...batch.manifest.figures.filter((f) => f.kind === 'sheet').map((f) => ({ file: `w3-si/${f.path}`, caption: 'Contact sheet of the batch: a Newman projection for every ring bond and a ring drawing for every conformer.' })),
+      ...batch.manifest.figures.filter((f) => f.kind === 'sheet').map((f) => ({ file: `w3-si/${f.path}`, caption: 'Conformer sheet of the batch: one conformer per row, its ring figure, then Newman projections along the most substituted ring bond and the exocyclic bonds to heavy groups; the sheet notes what was left out.' })),
     ],
     links: [{ file: 'w3-inspect.txt', label: 'inspect summary with couplings' }, { file: 'w3-si/manifest.json', label: 'batch manifest' }, ...tables],
   });

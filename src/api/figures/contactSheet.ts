@@ -42,7 +42,7 @@ function splitRoot(svg: string): { tag: string; inner: string } {
 }
 
 /** Nests a panel SVG at a placement, in the sheet's user units. */
-function nest(svg: string, x: number, y: number, width: number, height: number, letter: string): string {
+export function nestPanel(svg: string, x: number, y: number, width: number, height: number, letter: string): string {
   const { tag, inner } = splitRoot(svg);
   const viewBox = /\sviewBox="([^"]*)"/.exec(tag)?.[1] ?? `0 0 ${round(width)} ${round(height)}`;
   const cls = /\sclass="([^"]*)"/.exec(tag)?.[1] ?? '';
@@ -62,7 +62,7 @@ export function contactSheet(panels: readonly ContactPanel[], options: ContactSh
   const sheet = renderSvg(scene, theme, { idPrefix: options.idPrefix ?? 'sheet-' });
   const nested = panels.map((p, k) => {
     const at = placements[k]!;
-    return nest(p.svg, at.x, at.y, at.width, at.height, panelLetter(k));
+    return nestPanel(p.svg, at.x, at.y, at.width, at.height, panelLetter(k));
   });
   const close = sheet.lastIndexOf('</svg>');
   return `${sheet.slice(0, close)}${nested.join('')}</svg>`;

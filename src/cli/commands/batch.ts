@@ -4,6 +4,8 @@ import cliProgress from 'cli-progress';
 import {
   BOND_SETS,
   FIGURE_FORMATS,
+  SHEET_LAYOUTS,
+  SHEET_NEWMANS,
   TABLE_FORMATS,
   batchFile,
   formatIssue,
@@ -22,6 +24,8 @@ interface BatchFlags {
   dpi?: string;
   idPrefix?: string;
   sheet?: boolean;
+  sheetLayout?: string;
+  sheetNewmans?: string;
   tables?: string;
   jobs?: string;
   energyField?: string;
@@ -46,7 +50,9 @@ export function registerBatch(program: Command): void {
     .option('--dpi <n>', DPI_HELP)
     .option('--theme <name|path>', 'column (print), projector (slides), contrast (colour-blind-safe), or a theme .json file (default column)')
     .option('--id-prefix <p>', 'put before every figure\'s own id prefix, to keep figures of several batches apart on one page')
-    .option('--no-sheet', 'write no contact sheet')
+    .option('--no-sheet', 'write no conformer sheet')
+    .option('--sheet-layout <layout>', 'conformer sheets as a page 17 cm wide (page) or a 16:9 slide (slide; use --theme projector); default page')
+    .option('--sheet-newmans <which>', 'Newman projections on the sheets: informative (one ring bond per ring, exocyclic bonds to heavy groups) or drawn (every one written); default informative')
     .option('--tables <list>', `table formats, comma-separated: ${[...TABLE_FORMATS.keys()].join(', ')}, or none (default csv,md,tex)`)
     .option('--jobs <n>', 'worker threads for figures, used above 40 figures (default min(4, cores))')
     .option('--energy-field <name>', 'SD field or XYZ key holding the energy (default: the first whose name contains "energy")')
@@ -61,6 +67,8 @@ export function registerBatch(program: Command): void {
       let started = false;
       const result = await batchFile(file, flags.dir, {
         bonds: flags.bonds, sp2Bonds: flags.sp2Bonds === true, formats, tables, jobs, theme: flags.theme, dpi: dpiOption(flags.dpi), idPrefix: flags.idPrefix, sheet: flags.sheet !== false,
+        sheetLayout: oneOf('--sheet-layout', flags.sheetLayout, [...SHEET_LAYOUTS.keys()], 'page'),
+        sheetNewmans: oneOf('--sheet-newmans', flags.sheetNewmans, SHEET_NEWMANS, 'informative'),
         energy: { field: flags.energyField, unit: flags.energyUnit },
         read, hold, maxPixels,
         onProgress: bar

@@ -1,7 +1,7 @@
 /** `conformark ensemble FILE`: conformers ranked by energy with Boltzmann populations; sheet and energy ladder. */
 import type { Command } from 'commander';
-import { ensembleFile, ensembleText, formatIssue, jsonText, protectInput, writeEnsembleFigures } from '../../index.js';
-import { finiteNumber, limitsOf, printWarnings } from '../options.js';
+import { ensembleFile, ensembleText, formatIssue, jsonText, protectInput, writeEnsembleFigures, LADDER_UNITS, SHEET_LAYOUTS } from '../../index.js';
+import { finiteNumber, limitsOf, oneOf, printWarnings } from '../options.js';
 
 interface EnsembleFlags {
   temperature?: string;
@@ -13,6 +13,8 @@ interface EnsembleFlags {
   dir?: string;
   theme?: string;
   idPrefix?: string;
+  ladderUnit?: string;
+  sheetLayout?: string;
 }
 
 /** Adds the `ensemble` command to the program. */
@@ -30,8 +32,12 @@ export function registerEnsemble(program: Command): void {
     .option('-d, --dir <dir>', 'also write the conformer sheet and the energy ladder (SVG) into this folder')
     .option('--theme <name|path>', 'figure theme: column, projector, contrast, or a .json file (default column)')
     .option('--id-prefix <p>', 'put before every id in the figures')
+    .option('--sheet-layout <layout>', 'conformer sheets as a page 17 cm wide (page) or a 16:9 slide (slide; use --theme projector); default page')
+    .option('--ladder-unit <unit>', 'energy unit of the ladder\'s axis and labels: kcal/mol or kJ/mol (default kcal/mol)')
     .action(async (file: string, flags: EnsembleFlags, command: Command) => {
       const { read, hold } = limitsOf(command);
+      const sheetLayout = oneOf('--sheet-layout', flags.sheetLayout, [...SHEET_LAYOUTS.keys()], 'page');
+      const ladderUnit = oneOf('--ladder-unit', flags.ladderUnit, [...LADDER_UNITS.keys()], 'kcal/mol');
       protectInput(file);
       const result = await ensembleFile(file, {
         temperatureK: flags.temperature === undefined ? undefined : finiteNumber('--temperature', flags.temperature, 1e-6),
@@ -45,7 +51,7 @@ export function registerEnsemble(program: Command): void {
       for (const { record, warning } of result.warnings) printWarnings([warning], `${file}: record ${record}`);
       process.stdout.write(flags.json ? jsonText(result.report) : ensembleText(result.report));
       if (flags.dir) {
-        const written = writeEnsembleFigures(result, flags.dir, { theme: flags.theme, idPrefix: flags.idPrefix });
+        const written = writeEnsembleFigures(result, flags.dir, { theme: flags.theme, idPrefix: flags.idPrefix, ladderUnit, sheetLayout });
         process.stderr.write(`conformark: wrote ${written.join(', ')} into ${flags.dir}\n`);
       }
       if (result.errors.length > 0) process.exitCode = 1;
