@@ -16,7 +16,9 @@ const figures = walk('gallery').filter((f) => f.endsWith('.svg'));
 
 /** Problems still counted on these figures (projected-view labels, a Newman panel of a sheet, plot labels over marks). */
 const NOT_YET_ZERO: Record<string, number> = {
-  'ensemble-sheet-1.svg': 5,
+  // sheet ring panels: a projected twist-boat's CH3 and bond ends
+  'ensemble-sheet-2.svg': 3,
+  'ensemble-sheet-3.svg': 2,
   'w2-twist-boat-projected.svg': 2,
   'w4-ring-projected.svg': 1,
   'walk/occupancy.svg': 1,
