@@ -8,8 +8,8 @@
  * calls (canvas.line/path/circle/plain + attr, then svg() without `data-svgjs`), but building, cloning and
  * serialising svgdom nodes cost more than half of every figure (batch bench). The rules that svg.js applies
  * (number text, colour normalising, escaping, attribute order) live in svgMarkup.ts; a property test renders
- * random scenes both ways and compares bytes, and the goldens pin them. svg.js stays where a DOM is needed:
- * the editable document of figureDocument (svgDocument.ts).
+ * random scenes both ways and compares bytes, and the goldens pin them. svg.js on svgdom stays the test
+ * reference (svgDocument.ts).
  */
 import type { Scene, SceneItem } from '../layout/scene.js';
 import { usageError } from '../model/errors.js';

@@ -1,7 +1,7 @@
 /**
- * The svgdom window and svg.js, for handing a figure over as an editable svg.js document (figureDocument.ts) and
- * as the reference the direct SVG writer is tested against. One window for the whole process, with the shipped
- * DejaVu Sans mapped, so svg.js measurements (bbox) agree with measureText. Load it only where a DOM is needed.
+ * The svgdom window with svg.js: the reference the direct SVG writer and the advance table are tested against
+ * (test/helpers). One window for the whole process, with the shipped DejaVu Sans mapped. No library code loads it:
+ * import it only where a DOM is needed.
  */
 import { createSVGWindow, config } from 'svgdom';
 import { SVG, registerWindow, type Svg } from '@svgdotjs/svg.js';
@@ -22,10 +22,4 @@ export function sharedCanvas(): Svg {
     canvas = SVG(window.document.documentElement as unknown as SVGSVGElement) as Svg;
   }
   return canvas;
-}
-
-/** A figure's SVG text as a detached svg.js element on the shared window (edit it, then `.svg()` for the text). */
-export function svgDocument(svg: string): Svg {
-  sharedCanvas(); // registers the window svg.js creates elements in
-  return SVG(svg.replace(/^<\?xml[^>]*>\s*/, '')) as Svg;
 }

@@ -1,7 +1,7 @@
 /**
  * Where figures get their text widths and font files. Kept as the import point for layout callers; nothing here
- * loads a DOM: widths come from the generated advance table (measureText.ts). The svgdom window for an editable
- * svg.js document lives in svgDocument.ts, loaded only by figureDocument.
+ * loads a DOM: widths come from the generated advance table (measureText.ts). The svgdom window lives in
+ * svgDocument.ts, for the tests' svg.js reference only.
  */
 export { measureText } from './measureText.js';
 export { FONT_DIR, FONT_FILE, FONT_FILE_BOLD } from './fontFiles.js';
