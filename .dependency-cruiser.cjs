@@ -39,7 +39,7 @@ const rooms = {
   },
   api: {
     shared: ['[^/]+\\.ts', 'figures/', 'tables/', 'inspect/'],
-    jobs: { build: [], trajectory: [], batch: [], ensemble: [], demo: ['batch', 'build', 'ensemble', 'trajectory'] },
+    jobs: { build: [], trajectory: [], batch: [], ensemble: [], explore: ['ensemble'], demo: ['batch', 'build', 'ensemble', 'explore', 'trajectory'] },
   },
 };
 for (const [layer, { shared, jobs }] of Object.entries(rooms)) {

@@ -12,6 +12,7 @@ export { klynePrelog, torsionRelation } from './geometry/klynePrelog.js';
 export type { KlynePrelog, TorsionRelation } from './geometry/klynePrelog.js';
 export { wrap180, wrap360 } from './geometry/vec3.js';
 export { writeAtomic, protectInput } from './io/writeAtomic.js';
+export { abandonOutputs } from './io/abandonOutputs.js';
 export { buildGraph } from './perceive/graph.js';
 export type { Graph } from './perceive/graph.js';
 export {
@@ -127,7 +128,7 @@ export type { Legibility, LegibilityCounts, LegibilityOptions, LegibilityProblem
 export { textRuns, runsText, MIN_TEXT_SIZE } from './layout/text/textRuns.js';
 export { renderSvg } from './render/renderSvg.js';
 export type { RenderSvgOptions } from './render/renderSvg.js';
-export { renderPng, pngResolution, DEFAULT_DPI } from './render/renderPng.js';
+export { renderPng, pngResolution, DEFAULT_DPI, DEFAULT_MAX_PIXELS } from './render/renderPng.js';
 export type { RenderPngOptions } from './render/renderPng.js';
 export { renderPdf, svgSizePt } from './render/renderPdf.js';
 export { measureText } from './render/svgWindow.js';
@@ -157,7 +158,11 @@ export { isTrigonalAtom, isTrigonalRing, trigonalAtoms } from './perceive/trigon
 // shared record preparation (integrator)
 export { prepareRecord, readRecord } from './api/prepare.js';
 export { FLAT_INPUT_WARNING, isTwoDimensional } from './api/flatInput.js';
-export type { PreparedRecord } from './api/prepare.js';
+export type { PreparedRecord, PrepareOptions } from './api/prepare.js';
+export { DEFAULT_MAX_RING_SIZE, isCoordinationBond, ringClosingBonds, scopeRings } from './perceive/ringScope.js';
+export type { RingScopeOptions, SetAsideRing, SetAsideReason } from './perceive/ringScope.js';
+export { isMetal } from './model/elements.js';
+export { METAL_TOLERANCE_A } from './perceive/perceiveBonds.js';
 // inspect (integrator)
 export { inspectFile, inspectMolecule } from './api/inspect/inspect.js';
 export type { InspectOptions, InspectReport } from './api/inspect/inspect.js';
@@ -257,6 +262,18 @@ export { renderDemo, DEMO_INPUTS } from './api/demo/demo.js';
 export type { DemoOptions, DemoResult } from './api/demo/demo.js';
 export { galleryPage } from './api/demo/galleryPage.js';
 export type { GalleryFigure, GalleryLink, GallerySection } from './api/demo/galleryPage.js';
+
+// explore: the self-contained explorer page
+export { exploreFile } from './api/explore/exploreFile.js';
+export type { ExploreOptions, ExploreResult } from './api/explore/exploreFile.js';
+export { exploreModel, EXPLORE_MAX_BYTES } from './api/explore/exploreModel.js';
+export type { ExploreModel, ExploreModelOptions, ExploreRow } from './api/explore/exploreModel.js';
+export { exploreRecord } from './api/explore/exploreRecord.js';
+export type { ExploreBond, ExploreRing, ExploreTorsion, ExploreFigure, ExploreFigureOptions, ExploreRecordDetail, ExploreRecordOptions } from './api/explore/exploreRecord.js';
+export { explorePage } from './api/explore/explorePage.js';
+export type { ExplorePageOptions } from './api/explore/explorePage.js';
+export { figureCommand, shellWord } from './api/explore/exploreCommand.js';
+export type { FigureCommand } from './api/explore/exploreCommand.js';
 
 // area J (robustness): file-system reasons in words
 export { fsReason, isSystemError } from './io/fsReason.js';

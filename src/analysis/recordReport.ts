@@ -6,6 +6,7 @@
 import type { Molecule } from '../model/molecule.js';
 import type { Warning } from '../model/errors.js';
 import type { Graph } from '../perceive/graph.js';
+import { isCoordinationBond, type SetAsideReason, type SetAsideRing } from '../perceive/ringScope.js';
 import { analyzeRing, type AnalyzeRingOptions } from './ringAnalysis.js';
 import { toReportRing, type ReportRing } from './ringReport.js';
 import {
@@ -43,14 +44,18 @@ export interface RecordReport {
     serial: number | null;
     xyz: [number, number, number];
   }[];
-  bonds: { atoms: [number, number]; order: number; perceived: boolean }[];
+  /** `coordination` is true for a bond to a metal atom (it closes no ring unless asked). */
+  bonds: { atoms: [number, number]; order: number; perceived: boolean; coordination: boolean }[];
   rings: ReportRing[];
+  /** Rings found but not analysed (a disulfide loop, a ring over the size limit), atoms 1-based. */
+  setAsideRings: { atoms: number[]; size: number; reason: SetAsideReason; message: string }[];
   couplings?: (CouplingJson & { ring: number })[];
   warnings: Warning[];
 }
 
 /**
- * Builds the report of one record. `rings` are 0-based atom lists in bonded order (from `findRings`).
+ * Builds the report of one record. `rings` are 0-based atom lists in bonded order (from `findRings`);
+ * `setAside` are rings found but not analysed (listed in `setAsideRings`).
  * @example recordReport(mol, graph, findRings(graph)).rings[0]?.shape // 'chair'
  */
 export function recordReport(
@@ -58,6 +63,7 @@ export function recordReport(
   graph: Graph,
   rings: readonly (readonly number[])[],
   options: RecordReportOptions = {},
+  setAside: readonly SetAsideRing[] = [],
 ): RecordReport {
   const c = mol.coords;
   const analysed = rings.map((ring, i) => analyzeRing(mol, graph, ring, { ...options.ring, id: i + 1 }));
@@ -75,8 +81,9 @@ export function recordReport(
       serial: a.serial ?? null,
       xyz: [c[3 * i]!, c[3 * i + 1]!, c[3 * i + 2]!],
     })),
-    bonds: (mol.bonds ?? []).map((b) => ({ atoms: [b.a + 1, b.b + 1], order: b.order, perceived: b.perceived })),
+    bonds: (mol.bonds ?? []).map((b) => ({ atoms: [b.a + 1, b.b + 1], order: b.order, perceived: b.perceived, coordination: isCoordinationBond(mol, b) })),
     rings: analysed.map(toReportRing),
+    setAsideRings: setAside.map((r) => ({ atoms: r.atoms.map((a) => a + 1), size: r.atoms.length, reason: r.reason, message: r.message })),
     // aromatic and other sp²-only rings carry no nearly-planar warning (analyzeRing leaves it out)
     // what the reader read past (close contacts between residues, CONECT not applied) comes first
     warnings: [

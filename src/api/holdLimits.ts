@@ -12,21 +12,28 @@ export interface HoldOptions {
   readonly maxRecords?: number;
   /** Most atoms over all records held, default 2,000,000 (CLI `--max-total-atoms`). */
   readonly maxTotalAtoms?: number;
+  /**
+   * Most characters of titles, data-field names and values over all records held, default 64,000,000 (CLI
+   * `--max-total-text`): long comments and SD fields cannot add up past this.
+   */
+  readonly maxTotalText?: number;
 }
 
 /** `HoldOptions` with the defaults applied. */
 export interface HoldLimits {
   readonly maxRecords: number;
   readonly maxTotalAtoms: number;
+  readonly maxTotalText: number;
 }
 
-export const DEFAULT_HOLD_LIMITS: HoldLimits = { maxRecords: 100_000, maxTotalAtoms: 2_000_000 };
+export const DEFAULT_HOLD_LIMITS: HoldLimits = { maxRecords: 100_000, maxTotalAtoms: 2_000_000, maxTotalText: 64_000_000 };
 
 /** Applies the defaults of `HoldOptions`. */
 export function resolveHoldLimits(options: HoldOptions = {}): HoldLimits {
   return {
     maxRecords: options.maxRecords ?? DEFAULT_HOLD_LIMITS.maxRecords,
     maxTotalAtoms: options.maxTotalAtoms ?? DEFAULT_HOLD_LIMITS.maxTotalAtoms,
+    maxTotalText: options.maxTotalText ?? DEFAULT_HOLD_LIMITS.maxTotalText,
   };
 }
 
@@ -39,10 +46,12 @@ export function holdCounter(path: string, options: HoldOptions = {}): { add(mol:
   const limits = resolveHoldLimits(options);
   let records = 0;
   let atoms = 0;
+  let text = 0;
   return {
     add(mol: Molecule): void {
       records++;
       atoms += mol.atoms.length;
+      text += textHeld(mol);
       const line = mol.source.line > 0 ? mol.source.line : null;
       if (records > limits.maxRecords) {
         const message = `record ${mol.source.index}: more than ${limits.maxRecords} records to hold at once (raise with --max-records, option maxRecords)`;
@@ -52,8 +61,19 @@ export function holdCounter(path: string, options: HoldOptions = {}): { add(mol:
         const message = `record ${mol.source.index}: more than ${limits.maxTotalAtoms} atoms in all records to hold at once (raise with --max-total-atoms, option maxTotalAtoms)`;
         throw new ConformarkError({ code: 'too-many-atoms-total', file: path, line, message });
       }
+      if (text > limits.maxTotalText) {
+        const message = `record ${mol.source.index}: more than ${limits.maxTotalText} characters of titles and data fields in all records to hold at once (raise with --max-total-text, option maxTotalText)`;
+        throw new ConformarkError({ code: 'too-much-text-total', file: path, line, message });
+      }
     },
   };
+}
+
+/** Characters of text a record carries: its title and every data field's name and value. */
+export function textHeld(mol: Molecule): number {
+  let n = mol.title.length;
+  for (const key in mol.properties) n += key.length + (mol.properties[key]?.length ?? 0);
+  return n;
 }
 
 /**

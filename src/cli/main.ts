@@ -3,7 +3,7 @@
  * User errors print one line each and exit 2; bugs print one "internal error" line (stack with `--debug`).
  */
 import { Command, CommanderError } from 'commander';
-import { ConformarkError, formatIssue, fsReason, safeText, VERSION } from '../index.js';
+import { abandonOutputs, ConformarkError, formatIssue, fsReason, safeText, VERSION } from '../index.js';
 import { COMMANDS } from './commands/index.js';
 import { addLimitOptions } from './options.js';
 
@@ -31,6 +31,7 @@ export async function main(argv: readonly string[]): Promise<number> {
   const program = buildProgram();
   const debug = argv.includes('--debug');
   quietOnClosedPipe();
+  cleanUpOnSignals();
   if (argv.slice(2).every((a) => a === '--debug')) {
     const names = [...COMMANDS.keys()].join(', ');
     process.stderr.write(`conformark: no command given (commands: ${names}); see conformark --help\n`);
@@ -42,6 +43,24 @@ export async function main(argv: readonly string[]): Promise<number> {
   } catch (err) {
     return reportFailure(err, debug, commandOf(argv));
   }
+}
+
+let signalGuard = false;
+
+/**
+ * SIGINT (Ctrl-C) and SIGTERM: remove the temporary files and folder locks of the run, so every output file
+ * and folder stays as it was before, then exit 130 or 143 (128 + the signal number) with one line.
+ */
+function cleanUpOnSignals(): void {
+  if (signalGuard) return;
+  signalGuard = true;
+  const stop = (name: string, code: number) => () => {
+    abandonOutputs();
+    process.stderr.write(`conformark: stopped by ${name}; outputs left as they were before the run\n`);
+    process.exit(code);
+  };
+  process.once('SIGINT', stop('SIGINT', 130));
+  process.once('SIGTERM', stop('SIGTERM', 143));
 }
 
 let pipeGuard = false;

@@ -1,6 +1,6 @@
 /** Option parsing shared by every command: whole numbers, enumerations, warnings on stderr. */
 import type { Command } from 'commander';
-import { DEFAULT_HOLD_LIMITS, DEFAULT_LIMITS, safeText, usageError, type HoldOptions, type ReadOptions, type Warning } from '../index.js';
+import { DEFAULT_HOLD_LIMITS, DEFAULT_LIMITS, DEFAULT_MAX_PIXELS, DEFAULT_MAX_RING_SIZE, safeText, usageError, type HoldOptions, type ReadOptions, type RingScopeOptions, type Warning } from '../index.js';
 
 /** A whole number ≥ `min` from a flag's text. */
 export function wholeNumber(flag: string, text: string, min = 1): number {
@@ -47,7 +47,12 @@ export interface LimitFlags {
   maxLineLength?: string;
   maxRecords?: string;
   maxTotalAtoms?: string;
+  maxTotalText?: string;
+  maxPixels?: string;
   altloc?: string;
+  metalRings?: boolean;
+  ssRings?: boolean;
+  maxRingSize?: string;
 }
 
 /** Adds the limit options to the program (inherited by every command). */
@@ -57,16 +62,32 @@ export function addLimitOptions(program: Command): Command {
     .option('--max-line-length <n>', `longest input line, characters (default ${DEFAULT_LIMITS.maxLineLength})`)
     .option('--max-records <n>', `most records read; commands that hold every record (inspect, ensemble) default to ${DEFAULT_HOLD_LIMITS.maxRecords}`)
     .option('--max-total-atoms <n>', `most atoms over all records for commands that hold every record (default ${DEFAULT_HOLD_LIMITS.maxTotalAtoms})`)
-    .option('--altloc <which>', 'alternate location kept in PDB/mmCIF files, chosen per residue: a letter such as A, or highest-occupancy (default; ties: the first)');
+    .option('--max-total-text <n>', `most characters of titles and data fields over all records held at once (default ${DEFAULT_HOLD_LIMITS.maxTotalText})`)
+    .option('--max-pixels <n>', `most pixels (width × height) of one PNG (default ${DEFAULT_MAX_PIXELS})`)
+    .option('--altloc <which>', 'alternate location kept in PDB/mmCIF files, chosen per residue: a letter such as A, or highest-occupancy (default; ties: the first)')
+    .option('--metal-rings', 'let bonds to metal atoms close rings, so chelate rings are analysed (default: coordination bonds close no rings)')
+    .option('--ss-rings', 'analyse rings through an S–S bond (disulfide loops; default: listed, not analysed)')
+    .option('--max-ring-size <n>', `largest ring analysed, atoms; larger rings are listed, not analysed (default ${DEFAULT_MAX_RING_SIZE})`);
+}
+
+/** Which rings are analysed, from the global ring options of `command`'s program. */
+export function ringScopeOf(command: Command): RingScopeOptions {
+  const flags = command.optsWithGlobals<LimitFlags>();
+  return {
+    metalRings: flags.metalRings === true,
+    disulfideRings: flags.ssRings === true,
+    maxRingSize: flags.maxRingSize === undefined ? DEFAULT_MAX_RING_SIZE : wholeNumber('--max-ring-size', flags.maxRingSize, 3),
+  };
 }
 
 /** Reader and hold limits from the global options of `command`'s program. */
-export function limitsOf(command: Command): { read: ReadOptions; hold: HoldOptions } {
+export function limitsOf(command: Command): { read: ReadOptions; hold: HoldOptions; maxPixels: number | undefined } {
   const flags = command.optsWithGlobals<LimitFlags>();
   const n = (flag: string, text: string | undefined): number | undefined => (text === undefined ? undefined : wholeNumber(flag, text));
   const maxRecords = n('--max-records', flags.maxRecords);
   return {
     read: { maxAtoms: n('--max-atoms', flags.maxAtoms), maxLineLength: n('--max-line-length', flags.maxLineLength), maxRecords, ...(flags.altloc === undefined ? {} : { altLoc: flags.altloc }) },
-    hold: { maxRecords, maxTotalAtoms: n('--max-total-atoms', flags.maxTotalAtoms) },
+    hold: { maxRecords, maxTotalAtoms: n('--max-total-atoms', flags.maxTotalAtoms), maxTotalText: n('--max-total-text', flags.maxTotalText) },
+    maxPixels: n('--max-pixels', flags.maxPixels),
   };
 }

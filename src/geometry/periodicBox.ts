@@ -36,6 +36,24 @@ export function boxFromLengths(a: number, b: number, c: number, alpha = 90, beta
   return { lengths: [a, b, c], anglesDeg: [alpha, beta, gamma], vectors: v, inverse: invert(v) };
 }
 
+/**
+ * The box of three row vectors a, b, c (Å, nine numbers) as GROMACS-style files give it (a along x, b in the
+ * xy plane: lower triangular); any other orientation is rebuilt from its lengths and angles (the same cell, in
+ * the setting of `boxFromLengths`). `null` for a zero or flat box (vacuum runs write zeros).
+ * @example boxFromVectors([30, 0, 0, 0, 30, 0, 0, 0, 30])!.lengths // [30, 30, 30]
+ */
+export function boxFromVectors(v: ArrayLike<number>): PeriodicBox | null {
+  const len = (k: number) => Math.hypot(v[k]!, v[k + 1]!, v[k + 2]!);
+  const angle = (i: number, j: number) => (Math.acos((v[i]! * v[j]! + v[i + 1]! * v[j + 1]! + v[i + 2]! * v[j + 2]!) / (len(i) * len(j))) * 180) / Math.PI;
+  const a = len(0), b = len(3), c = len(6);
+  if (!(a > 0 && b > 0 && c > 0)) return null;
+  const alpha = angle(3, 6), beta = angle(0, 6), gamma = angle(0, 3);
+  const lower = v[1] === 0 && v[2] === 0 && v[5] === 0 && v[0]! > 0 && v[4]! > 0 && v[8]! > 0;
+  if (!lower) return boxFromLengths(a, b, c, alpha, beta, gamma);
+  const vectors = Float64Array.from(v as ArrayLike<number>);
+  return { lengths: [a, b, c], anglesDeg: [alpha, beta, gamma], vectors, inverse: invert(vectors) };
+}
+
 /** Inverse of a lower-triangular 3×3 row-vector matrix (the form `boxFromLengths` builds). */
 function invert(m: Float64Array): Float64Array {
   const [a, , , bx, by, , cx, cy, cz] = m as unknown as number[];

@@ -4,6 +4,7 @@
  */
 import type { FormatName } from '../model/molecule.js';
 import type { ReadLimits } from './limits.js';
+import { GroConsumer } from './gro.js';
 import { MmcifConsumer } from './mmcif.js';
 import { Mol2Consumer } from './mol2.js';
 import { PdbConsumer } from './pdb.js';
@@ -89,6 +90,15 @@ export const FORMATS: ReadonlyMap<FormatName, FormatSpec> = new Map<FormatName, 
       extensions: ['.mol2', '.ml2'],
       sniff: (lines) => (lines.some((l) => l.startsWith('@<TRIPOS>')) ? 3 : 0),
       consumer: (file, limits, emit) => new Mol2Consumer(file, limits, emit),
+    },
+  ],
+  [
+    'gro',
+    {
+      extensions: ['.gro'],
+      // title, atom count, then fixed-column atom lines with a decimal point in the coordinate fields
+      sniff: (lines) => (/^\s*\d+\s*$/.test(lines[1] ?? '') && /^[\s\d]{5}.{15}\s*-?\d+\.\d+/.test(lines[2] ?? '') ? 2 : 0),
+      consumer: (file, limits, emit) => new GroConsumer(file, limits, emit),
     },
   ],
 ]);

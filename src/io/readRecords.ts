@@ -2,6 +2,8 @@
  * Streaming reader: a file, `-` (standard input) or a `.gz` file → an async stream of records, read in
  * chunks of about 1 MiB and split into lines by hand, so a large file is never held in memory.
  */
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { ParseError } from '../model/errors.js';
 import type { FormatName, Molecule } from '../model/molecule.js';
 import { detectFormat, SNIFF_LINES } from './detectFormat.js';
@@ -11,6 +13,7 @@ import { resolveLimits, type ReadLimits, type ReadOptions } from './limits.js';
 import { feedBlock, LineSplitter, type LineBlock } from './lines.js';
 import { openInput } from './openInput.js';
 import { scanConect } from './scanConect.js';
+import { TempFile } from './tempFile.js';
 import type { Settled } from './sink.js';
 
 /** Options of the streaming readers. */
@@ -26,6 +29,8 @@ export interface StreamOptions extends ReadOptions {
 export interface StreamExtras {
   /** Coordinate buffers the caller is done with; XYZ frames of the same size reuse them. */
   readonly pool?: Float64Array[];
+  /** Where the bytes are read from when it is not `path` (standard input spooled to a private file). */
+  readonly readFrom?: string;
 }
 
 /**
@@ -56,9 +61,14 @@ export async function* settledBatches(
   extras: StreamExtras = {},
 ): AsyncGenerator<Settled[]> {
   const limits = resolveLimits(options);
-  const chunks = openInput(path);
+  const spoolable = path === '-' && extras.readFrom === undefined;
+  const source = openInput(extras.readFrom ?? path);
+  // standard input's first chunks are kept until the format is known, in case it has to be spooled (PDB)
+  const seen: { chunks: Uint8Array[] | null } = { chunks: spoolable ? [] : null };
+  const chunks = spoolable ? recording(source, seen) : source;
   const queue: Settled[] = [];
   let fatal = false;
+  let spooled = false;
   let count = 0;
   let blank = true;
   const emit = (r: Settled): void => {
@@ -70,6 +80,19 @@ export async function* settledBatches(
   try {
     const head = await readHead(chunks, splitter);
     const format = options.format ?? detectFormat(path, head.lines.join('\n'));
+    if (seen.chunks && (format === 'pdb' || format === 'pdbqt')) {
+      // a PDB's CONECT records follow its models: spool standard input to a private file and stream that
+      // (as a file is streamed), instead of holding every model until the end of the input
+      const spool = await spoolInput(seen.chunks, source);
+      spooled = true;
+      try {
+        yield* settledBatches(path, { ...options, format }, { ...extras, readFrom: spool.tmp });
+      } finally {
+        spool.remove();
+      }
+      return;
+    }
+    seen.chunks = null;
     const consumer = FORMATS.get(format)!.consumer(path, limits, emit, await consumerExtras(path, format, limits, extras));
     let blocks = head.blocks;
     let chunk: Uint8Array | null = null;
@@ -111,6 +134,7 @@ export async function* settledBatches(
   } finally {
     await chunks.return(undefined);
   }
+  if (spooled) return;
   count += queue.length;
   if (queue.length > 0) yield queue.splice(0);
   if (count === 0) yield [{ ok: false, error: new ParseError(emptyInputIssue(path, blank)), fatal: true }];
@@ -154,8 +178,31 @@ async function readHead(
   return { lines, blocks, done };
 }
 
-/** PDB files (not standard input) get their CONECT records scanned first, so models can be streamed. */
+/** PDB files (and standard input spooled to one) get their CONECT records scanned first, so models can be streamed. */
 async function consumerExtras(path: string, format: FormatName, limits: ReadLimits, extras: StreamExtras): Promise<ConsumerExtras> {
-  if ((format !== 'pdb' && format !== 'pdbqt') || path === '-') return { pool: extras.pool };
-  return { pool: extras.pool, conect: await scanConect(path, limits) };
+  const file = extras.readFrom ?? path;
+  if ((format !== 'pdb' && format !== 'pdbqt') || file === '-') return { pool: extras.pool };
+  return { pool: extras.pool, conect: await scanConect(file, limits, path) };
+}
+
+/** Passes chunks through, keeping each in `seen.chunks` until the caller sets it to null. */
+async function* recording(source: AsyncGenerator<Uint8Array>, seen: { chunks: Uint8Array[] | null }): AsyncGenerator<Uint8Array> {
+  for await (const chunk of source) {
+    seen.chunks?.push(chunk);
+    yield chunk;
+  }
+}
+
+/** Standard input (the chunks read so far, then the rest) in a private temporary file (mode 0600, removed after). */
+async function spoolInput(seen: readonly Uint8Array[], rest: AsyncGenerator<Uint8Array>): Promise<TempFile> {
+  const spool = new TempFile(join(tmpdir(), 'conformark-stdin.pdb'), 'a temporary copy of standard input');
+  try {
+    for (const chunk of seen) spool.write(chunk);
+    for await (const chunk of rest) spool.write(chunk);
+    spool.finish();
+  } catch (err) {
+    spool.remove();
+    throw err;
+  }
+  return spool;
 }

@@ -6,16 +6,16 @@ import { openInput } from './openInput.js';
 import { parseConect, type Conect } from './pdbLine.js';
 import { issue } from './sink.js';
 
-/** Reads the CONECT records of the PDB file at `path`. Throws `ParseError` on a malformed one. */
-export async function scanConect(path: string, limits: ReadLimits): Promise<Conect[]> {
-  const splitter = new LineSplitter(path, limits.maxLineLength);
+/** Reads the CONECT records of the PDB file at `path` (messages name it `shownAs`). Throws `ParseError` on a malformed one. */
+export async function scanConect(path: string, limits: ReadLimits, shownAs: string = path): Promise<Conect[]> {
+  const splitter = new LineSplitter(shownAs, limits.maxLineLength);
   const out: Conect[] = [];
   const take = (lines: string[]): void => {
     const first = splitter.lastLine - lines.length + 1;
     lines.forEach((line, k) => {
       if (!line.startsWith('CONECT')) return;
       const c = parseConect(line, first + k);
-      if (typeof c === 'string') throw new ParseError(issue('bad-conect', path, first + k, c));
+      if (typeof c === 'string') throw new ParseError(issue('bad-conect', shownAs, first + k, c));
       out.push(c);
     });
   };

@@ -168,6 +168,9 @@ export class SdfConsumer implements LineConsumer {
     let bond: { readonly a: number; readonly b: number; readonly order: number } = scannedBond;
     if (!scanV2000Bond(text, start, end)) {
       const parsed = parseV2000Bond(text.slice(start, end));
+      if (typeof parsed === 'string' && this.isAtomLine(text, start, end)) {
+        return this.fail(issue('wrong-count', this.file, this.countsLine, `counts line says ${plural(this.counts.atoms, 'atom')}, but an atom line follows them (line ${lineNo})`));
+      }
       if (typeof parsed === 'string') return this.fail(issue('bad-bond', this.file, lineNo, parsed));
       bond = parsed;
     }
@@ -182,13 +185,34 @@ export class SdfConsumer implements LineConsumer {
     if (++this.bondsRead === this.counts.bonds) this.state = State.Props;
   }
 
+  /** True for a V2000 atom line (coordinates and an element). */
+  private isAtomLine(text: string, start: number, end: number): boolean {
+    if (scanV2000Atom(text, start, end) !== null) return true;
+    const line = text.slice(start, end);
+    return /^\s*-?\d/.test(line) && !('code' in parseV2000Atom(line));
+  }
+
   private v3000Line(line: string, lineNo: number): void {
     const err = this.v3000!.feed(line, lineNo);
     if (err) return this.fail(err);
     if (this.v3000!.done) this.state = State.Props;
   }
 
+  /** The line after an `A  ` (atom alias) line is free text, whatever it looks like. */
+  private aliasText = false;
+
   private propLine(text: string, start: number, end: number, lineNo: number): void {
+    if (this.aliasText) {
+      this.aliasText = false;
+      return;
+    }
+    if (starts(text, start, end, 'A  ')) this.aliasText = true;
+    // a counts line that says too few bonds (or atoms) must not drop the rest silently: a bond or atom line
+    // here, before `M  END`, is one the counts line did not count
+    if (this.v3000 === null && (BOND_LIKE.test(text.slice(start, end)) || this.isAtomLine(text, start, end))) {
+      const what = BOND_LIKE.test(text.slice(start, end)) ? `${plural(this.counts.bonds, 'bond')}, but a bond line` : `${plural(this.counts.atoms, 'atom')}, but an atom line`;
+      return this.fail(issue('wrong-count', this.file, this.countsLine, `counts line says ${what} follows them (line ${lineNo})`));
+    }
     if (starts(text, start, end, 'M  END')) {
       this.state = State.Data;
       return;
@@ -299,7 +323,13 @@ export class SdfConsumer implements LineConsumer {
     this.value = null;
     this.bondsRead = 0;
     this.chargesReset = false;
+    this.aliasText = false;
   }
+}
+
+/** `1 bond`, `2 bonds`. */
+function plural(n: number, word: string): string {
+  return `${n} ${word}${n === 1 ? '' : 's'}`;
 }
 
 /** Stores a data field as an own property, also when it is named `__proto__` (plain assignment would drop it). */

@@ -1,13 +1,12 @@
 /**
- * Atomic output: write to a temporary file in the same folder, then rename into place, so a failed run never
- * leaves a half-written file and never clobbers an existing one.
+ * Atomic output: write to a temporary file in the same folder (unpredictable name, exclusive create, every
+ * write checked, fsync), then rename into place, so a failed run never leaves a half-written file and never
+ * clobbers an existing one.
  */
-import { existsSync, mkdirSync, realpathSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
-import { basename, dirname, join, resolve } from 'node:path';
+import { existsSync, fstatSync, mkdirSync, realpathSync, statSync } from 'node:fs';
+import { dirname, resolve } from 'node:path';
 import { usageError } from '../model/errors.js';
-import { fsReason, isSystemError } from './fsReason.js';
-
-let counter = 0;
+import { TempFile, writeFailure } from './tempFile.js';
 
 /** Paths that must never be written (the inputs of the current run), compared after resolving. */
 const protectedPaths = new Set<string>();
@@ -32,9 +31,20 @@ function fileId(path: string): string | null {
   }
 }
 
-/** Marks a path as an input of this run: `writeAtomic` refuses to overwrite it. */
+/**
+ * Marks a path as an input of this run: `writeAtomic` refuses to overwrite it. `-` (standard input) protects
+ * the file standard input is redirected from, if it is one (`newman - -o mol.svg < mol.svg` is refused).
+ */
 export function protectInput(path: string): void {
-  if (path === '-') return;
+  if (path === '-') {
+    try {
+      const s = fstatSync(0);
+      if (s.isFile()) protectedFiles.add(`${s.dev}:${s.ino}`);
+    } catch {
+      // no standard input at all: nothing to protect
+    }
+    return;
+  }
   protectedPaths.add(canonical(path));
   const id = fileId(path);
   if (id) protectedFiles.add(id);
@@ -52,20 +62,27 @@ export function isProtected(path: string): boolean {
  * Creates the missing folders of `dir` one level at a time (Node's recursive mkdir can spin forever on
  * pseudo file systems such as /proc).
  */
-function makeFolders(dir: string): void {
+export function makeFolders(dir: string): string[] {
   const missing: string[] = [];
   for (let d = dir; !existsSync(d); d = dirname(d)) {
     missing.push(d);
     if (dirname(d) === d) break;
   }
-  for (const d of missing.reverse()) mkdirSync(d);
+  try {
+    for (const d of missing.reverse()) mkdirSync(d);
+  } catch (err) {
+    throw writeFailure(err, dir);
+  }
+  return missing;
 }
 
-function removeQuietly(path: string): void {
-  try {
-    rmSync(path, { force: true });
-  } catch {
-    // the temporary file was never made (e.g. its folder is a file): nothing to clean up
+/** Refuses `path` when it is a protected input or a folder. */
+export function checkTarget(path: string): void {
+  if (isProtected(path)) {
+    throw usageError('overwrite-input', 'refusing to overwrite the input file', path);
+  }
+  if (existsSync(path) && statSync(path).isDirectory()) {
+    throw usageError('write-failed', 'is a folder; give a file name to write to', path);
   }
 }
 
@@ -75,21 +92,10 @@ function removeQuietly(path: string): void {
  * @example writeAtomic('out/fig.svg', svgText)
  */
 export function writeAtomic(path: string, data: string | Uint8Array): void {
-  if (isProtected(path)) {
-    throw usageError('overwrite-input', 'refusing to overwrite the input file', path);
-  }
-  if (existsSync(path) && statSync(path).isDirectory()) {
-    throw usageError('write-failed', 'is a folder; give a file name to write to', path);
-  }
-  const dir = dirname(resolve(path));
-  const tmp = join(dir, `.${basename(path)}.${process.pid}.${++counter}.tmp`);
-  try {
-    makeFolders(dir);
-    writeFileSync(tmp, data);
-    renameSync(tmp, path);
-  } catch (err) {
-    removeQuietly(tmp);
-    if (isSystemError(err)) throw usageError('write-failed', `cannot write: ${fsReason(err.code)}`, path);
-    throw err;
-  }
+  checkTarget(path);
+  const target = resolve(path);
+  makeFolders(dirname(target));
+  const tmp = new TempFile(target, path);
+  tmp.write(data);
+  tmp.moveIntoPlace();
 }

@@ -67,3 +67,19 @@ export function elementByNumber(z: number): ElementInfo | undefined {
 export function atomicMass(symbol: string): number {
   return elementInfo(symbol)?.mass ?? 0;
 }
+
+/**
+ * Non-metals and metalloids (B, Si, Ge, As, Sb, Te, At): their bonds are covalent. Every other element is a
+ * metal, whose contacts are coordination (common practice, no source).
+ */
+const NOT_METAL: ReadonlySet<number> = new Set([1, 2, 5, 6, 7, 8, 9, 10, 14, 15, 16, 17, 18, 32, 33, 34, 35, 36, 51, 52, 53, 54, 85, 86]);
+
+/**
+ * True for a metal (by symbol, as {@link elementInfo} reads it); false for non-metals, metalloids and
+ * unknown symbols.
+ * @example isMetal('Zn') // true
+ */
+export function isMetal(symbol: string): boolean {
+  const info = elementInfo(symbol);
+  return info !== undefined && !NOT_METAL.has(info.z);
+}

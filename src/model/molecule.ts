@@ -1,7 +1,7 @@
 /** Core data types shared by every layer. Atom indices are 0-based inside the library, 1-based for users. */
 
 /** Input formats conformark reads. */
-export type FormatName = 'xyz' | 'sdf' | 'pdb' | 'pdbqt' | 'mmcif' | 'mol2';
+export type FormatName = 'xyz' | 'sdf' | 'pdb' | 'pdbqt' | 'mmcif' | 'mol2' | 'gro';
 
 /** One atom as read from a file. */
 export interface Atom {

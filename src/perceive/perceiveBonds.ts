@@ -3,7 +3,7 @@
  * al. 2008 (Dalton Trans. 2832) covalent radius (docs/methods.md#bond-perception). Candidate pairs come from a uniform spatial
  * grid, so the work is linear in the number of atoms.
  */
-import { elementInfo } from '../model/elements.js';
+import { elementInfo, isMetal } from '../model/elements.js';
 import { ConformarkError, usageError } from '../model/errors.js';
 import type { Bond, Molecule } from '../model/molecule.js';
 import { nearPairs, type PairList } from './nearPairs.js';
@@ -16,10 +16,24 @@ export interface PerceiveBondsOptions {
    * common practice, no source).
    */
   readonly toleranceA?: number;
+  /**
+   * Tolerance for a contact with a metal atom, Å: a metal–X pair is a bond only when d ≤ r_M + r_X + this.
+   * Default 0.25, or `toleranceA` when that is smaller.
+   */
+  readonly metalToleranceA?: number;
 }
 
 /** Default ε of the bond test, Å (docs/methods.md#bond-perception). */
 export const BOND_TOLERANCE_A = 0.4;
+/**
+ * Default ε for contacts with a metal atom, Å. Stricter than {@link BOND_TOLERANCE_A}: the radii of the
+ * s-block metals are large (Na 1.66 Å), so the general rule bonds a sodium ion to a carbon 2.79 Å away.
+ * Typical metal–donor distances in crystal structures (Harding 2006, Acta Cryst. D62, 678; from memory:
+ * Na–O 2.41, K–O 2.82, Mg–O 2.07, Ca–O 2.36, Zn–N(His) 2.03, Zn–S(Cys) 2.33 Å) all lie within
+ * r_M + r_X + 0.20 Å of the Cordero radii, so 0.25 Å keeps them with a margin and drops Na···C 2.79 Å
+ * (limit 2.67 Å). The value is common practice, no source.
+ */
+export const METAL_TOLERANCE_A = 0.25;
 /** Pairs closer than this are overlapping or duplicated atoms, never bonds, Å (docs/methods.md#bond-perception). */
 export const MIN_BOND_LENGTH_A = 0.4;
 
@@ -37,6 +51,8 @@ for (const z of [1, 2, 5, 6, 7, 8, 9, 10, 14, 15, 16, 17, 18, 33, 34, 35, 36, 52
  *   removes the 1.85 Å bridgehead contact of bicyclo[1.1.1]pentane, which the distance test alone accepts).
  *   Bonds from carbon to metals are not capped.
  *
+ * Contacts with a metal atom use the stricter tolerance {@link METAL_TOLERANCE_A}.
+ *
  * Returns 0-based bonds with `a < b`, `order: 1`, `perceived: true`, sorted by `a` then `b`.
  * Throws a `ConformarkError` (`unknown-element`, `bad-coordinate`, `bad-option`) for unusable input.
  * @example perceiveBonds(water).map((b) => [b.a, b.b]) // [[0, 1], [0, 2]]
@@ -47,10 +63,15 @@ export function perceiveBonds(mol: Molecule, options: PerceiveBondsOptions = {})
     throw usageError('bad-option', `toleranceA must be a number ≥ 0 (Å), got ${String(options.toleranceA)}`);
   }
   const n = mol.atoms.length;
-  const { radii, z } = atomRadii(mol);
+  const { radii, z, metal } = atomRadii(mol);
   checkCoordinates(mol);
+  const metalTolerance = Math.min(tolerance, options.metalToleranceA ?? METAL_TOLERANCE_A);
+  if (!(metalTolerance >= 0)) {
+    throw usageError('bad-option', `metalToleranceA must be a number ≥ 0 (Å), got ${String(options.metalToleranceA)}`);
+  }
   const found = nearPairs(mol.coords, n, radii, tolerance, MIN_BOND_LENGTH_A);
   const kept = scratchUint8('bond-kept', found.count).fill(1);
+  capMetals(metal, radii, metalTolerance, found, kept);
   capHydrogens(n, z, found, kept);
   capCarbons(n, z, radii, found, kept);
   return sortedBonds(n, found, kept);
@@ -83,6 +104,16 @@ function sortedBonds(n: number, found: PairList, kept: Uint8Array): Bond[] {
     for (let k = row0; k < row1; k++) bonds[count++] = { a: v, b: partner[k]!, order: 1, perceived: true };
   }
   return bonds;
+}
+
+/** Drops each metal contact longer than r_M + r_X + `tolerance` (the stricter metal rule). */
+function capMetals(metal: Uint8Array, radii: Float64Array, tolerance: number, found: PairList, kept: Uint8Array): void {
+  const { i: a, j: b, d2 } = found;
+  for (let k = 0; k < found.count; k++) {
+    if (!metal[a[k]!] && !metal[b[k]!]) continue;
+    const limit = radii[a[k]!]! + radii[b[k]!]! + tolerance;
+    if (d2[k]! > limit * limit) kept[k] = 0;
+  }
 }
 
 /** Each H keeps only its nearest candidate (ties to the lower partner index, so order does not matter). */
@@ -141,10 +172,12 @@ function capCarbons(n: number, z: Uint8Array, radii: Float64Array, found: PairLi
   }
 }
 
-function atomRadii(mol: Molecule): { radii: Float64Array; z: Uint8Array } {
+function atomRadii(mol: Molecule): { radii: Float64Array; z: Uint8Array; metal: Uint8Array } {
   const n = mol.atoms.length;
   const radii = new Float64Array(n);
   const z = new Uint8Array(n);
+  const metal = new Uint8Array(n);
+  const metals = new Map<string, boolean>();
   const known = new Map<string, ReturnType<typeof elementInfo>>();
   for (let i = 0; i < n; i++) {
     const element = mol.atoms[i]!.element;
@@ -163,8 +196,11 @@ function atomRadii(mol: Molecule): { radii: Float64Array; z: Uint8Array } {
     }
     radii[i] = info.radius;
     z[i] = info.z;
+    let m = metals.get(element);
+    if (m === undefined) metals.set(element, (m = isMetal(element)));
+    metal[i] = m ? 1 : 0;
   }
-  return { radii, z };
+  return { radii, z, metal };
 }
 
 function checkCoordinates(mol: Molecule): void {

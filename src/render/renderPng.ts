@@ -6,6 +6,7 @@
 import { crc32 } from 'node:zlib';
 import { createRequire } from 'node:module';
 import type { Resvg as ResvgClass } from '@resvg/resvg-js';
+import { usageError } from '../model/errors.js';
 import { FONT_FILE, FONT_FILE_BOLD } from './fontFiles.js';
 
 // loaded on first use (a native addon): most runs write no PNG
@@ -15,6 +16,9 @@ const loadResvg = (): typeof ResvgClass => (Resvg ??= (createRequire(import.meta
 /** Default PNG resolution, dots per inch (print). */
 export const DEFAULT_DPI = 300;
 
+/** Default cap on the pixels of one PNG: 64 megapixels (an 8,000 × 8,000 image, 256 MB of RGBA while drawn). */
+export const DEFAULT_MAX_PIXELS = 64_000_000;
+
 /** Options of {@link renderPng}. */
 export interface RenderPngOptions {
   /** Resolution, dots per inch: the SVG's size in pt or CSS px (96 per inch) becomes this many pixels per inch. Default 300. */
@@ -23,6 +27,8 @@ export interface RenderPngOptions {
   readonly scale?: number;
   /** Page colour behind the figure (`currentColor` paints black). Default `#ffffff`. */
   readonly background?: string;
+  /** Most pixels (width × height) of the image; a larger one is refused before any is drawn. Default 64,000,000. */
+  readonly maxPixels?: number;
 }
 
 /** The PNG bytes with a pHYs chunk (pixels per metre, unit metre) after IHDR, replacing any earlier one. */
@@ -68,13 +74,20 @@ export function pngResolution(png: Uint8Array): { x: number; y: number } | null 
  * @example writeFileSync('fig.png', renderPng(svg, { dpi: 600 }))
  */
 export function renderPng(svg: string, options: RenderPngOptions = {}): Uint8Array {
-  const { background = '#ffffff' } = options;
+  const { background = '#ffffff', maxPixels = DEFAULT_MAX_PIXELS } = options;
   const scale = options.scale ?? (options.dpi ?? DEFAULT_DPI) / 96;
+  if (!(Number.isFinite(scale) && scale > 0)) throw usageError('bad-option', `PNG resolution must be a positive number, got ${options.scale ?? options.dpi}`);
   const resvg = new (loadResvg())(svg, {
     font: { loadSystemFonts: false, fontFiles: [FONT_FILE, FONT_FILE_BOLD], defaultFontFamily: 'DejaVu Sans', sansSerifFamily: 'DejaVu Sans' },
     fitTo: { mode: 'zoom', value: scale },
     background,
     logLevel: 'off',
   });
+  const width = Math.ceil(resvg.width * scale);
+  const height = Math.ceil(resvg.height * scale);
+  if (width * height > maxPixels) {
+    const mp = ((width * height) / 1e6).toFixed(1);
+    throw usageError('too-many-pixels', `the PNG would be ${width} × ${height} pixels (${mp} megapixels), more than the limit of ${maxPixels} (raise with --max-pixels, option maxPixels; lower --dpi; or write SVG or PDF)`);
+  }
   return withResolution(new Uint8Array(resvg.render().asPng()), scale * 96);
 }

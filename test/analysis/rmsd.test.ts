@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { heavyAtomRmsd } from '../../src/analysis/rmsd.js';
 import { findDuplicates } from '../../src/analysis/duplicates.js';
@@ -11,6 +12,8 @@ const mapped = (mol: Molecule, f: (p: Vec3) => Vec3): Molecule => {
   for (let i = 0; i < mol.atoms.length; i++) coords.set(f([mol.coords[3 * i]!, mol.coords[3 * i + 1]!, mol.coords[3 * i + 2]!]), 3 * i);
   return { ...mol, coords };
 };
+/** A copy of `mol` with every coordinate shifted by the matching entry of `noise` (cycled). */
+const moved = (mol: Molecule, noise: readonly number[]): Molecule => ({ ...mol, coords: mol.coords.map((c, k) => c + noise[k % noise.length]!) });
 const turn = (p: Vec3): Vec3 => [0.6 * p[0] - 0.8 * p[1] + 3, 0.8 * p[0] + 0.6 * p[1] - 1, p[2] + 2];
 
 describe('heavyAtomRmsd', () => {
@@ -72,6 +75,41 @@ describe('findDuplicates', () => {
     expect(findDuplicates([chair, copy], { energies: [0, 0.02] })).toEqual([null, 0]);
     expect(findDuplicates([chair, copy], { energies: [0, 0.3] })).toEqual([null, null]);
     expect(findDuplicates([chair, copy], { energies: [0, 0.3], energyWindow: 0.5 })).toEqual([null, 0]);
+  });
+
+  it('findDuplicates (bounds and a grid) gives exactly what comparing every pair gives, ties and near-threshold copies included', () => {
+    const chair = cyclohexaneChair();
+    // the plain definition: the first earlier unique record within the window and the threshold
+    const everyPair = (records: readonly Molecule[], threshold: number, energies: readonly number[]) => {
+      const unique: number[] = [];
+      return records.map((r, i) => {
+        const m = unique.find((u) => Math.abs(energies[u]! - energies[i]!) <= 0.05 && heavyAtomRmsd(records[u]!, r).rmsdA <= threshold);
+        if (m !== undefined) return m;
+        unique.push(i);
+        return null;
+      });
+    };
+    fc.assert(
+      fc.property(
+        fc.array(fc.record({ noise: fc.array(fc.double({ min: -0.15, max: 0.15, noNaN: true }), { minLength: 54, maxLength: 54 }), energy: fc.constantFrom(0, 0, 0.01, 1), scale: fc.double({ min: 0.9, max: 1.25, noNaN: true }) }), { minLength: 1, maxLength: 25 }),
+        fc.constantFrom(0.05, 0.125, 0.3),
+        (specs, threshold) => {
+          // scaled records spread over many grid cells, so pairs across cell borders are tested too
+          const records = specs.map(({ noise, scale }) => mapped(moved(chair, noise), (p) => turn([scale * p[0], scale * p[1], scale * p[2]])));
+          const energies = specs.map((s) => s.energy);
+          expect(findDuplicates(records, { rmsdThresholdA: threshold, energies })).toEqual(everyPair(records, threshold, energies));
+        },
+      ),
+      { seed: 21, numRuns: 150 },
+    );
+  });
+
+  it('findDuplicates refuses records with different atoms and non-finite energies with a ConformarkError', () => {
+    const chair = cyclohexaneChair();
+    const fewer = { ...chair, atoms: chair.atoms.slice(1), coords: chair.coords.slice(3) };
+    expect(() => findDuplicates([chair, fewer])).toThrow(expect.objectContaining({ code: 'atoms-differ' }));
+    expect(() => findDuplicates([chair, chair], { energies: [0, Number.NaN] })).toThrow(expect.objectContaining({ code: 'bad-energies' }));
+    expect(() => findDuplicates('records' as never)).toThrow(expect.objectContaining({ code: 'bad-argument' }));
   });
 });
 

@@ -17,7 +17,7 @@ describe('inspectFile', () => {
     const r = report.records[0]!;
     expect(Object.keys(r).slice(0, 6)).toEqual(['index', 'title', 'energy', 'atoms', 'bonds', 'rings']);
     expect(Object.keys(r.atoms[0]!)).toEqual(['id', 'element', 'name', 'residue', 'serial', 'xyz']);
-    expect(Object.keys(r.bonds[0]!)).toEqual(['atoms', 'order', 'perceived']);
+    expect(Object.keys(r.bonds[0]!)).toEqual(['atoms', 'order', 'perceived', 'coordination']);
     expect(Object.keys(r.rings[0]!).slice(0, 8)).toEqual([
       'id', 'atoms', 'size', 'puckering', 'shape', 'descriptor', 'torsions', 'substituents',
     ]);

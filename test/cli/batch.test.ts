@@ -1,6 +1,6 @@
 import { spawnSync } from 'node:child_process';
 import { mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { availableParallelism, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { formatSdf, type Molecule } from '../../src/index.js';
@@ -34,6 +34,20 @@ describe('conformark batch', () => {
     expect(two.status, two.stderr).toBe(0);
     expect(one.stderr).toMatch(/wrote 81 figure files and 15 tables/);
     sameTree(join(root, 'one'), join(root, 'two'));
+  }, 120_000);
+
+  it('conformark batch --max-pixels over the figures stops with one line from the worker threads; --jobs above the cores is capped with a note', () => {
+    const input = join(root, 'all.sdf');
+    writeFileSync(input, formatSdf(mols));
+    const out = join(root, 'capped');
+    const r = run('batch', input, '-d', out, '--formats', 'png', '--max-pixels', '1000', '--jobs', '2');
+    expect(r.status).toBe(2);
+    expect(r.stderr).toMatch(/^conformark: the PNG would be \d+ × \d+ pixels \([\d.]+ megapixels\), more than the limit of 1000 \(raise with --max-pixels/);
+    expect(r.stderr.trim().split('\n')).toHaveLength(1);
+    expect(readdirSync(root)).not.toContain('capped'); // the refused run removes the folder it created
+    const many = run('batch', input, '-d', join(root, 'many'), '--jobs', '100000', '--tables', 'none', '--no-sheet');
+    expect(many.status, many.stderr).toBe(0);
+    expect(many.stderr).toMatch(new RegExp(`note: jobs 100000 is more than the ${availableParallelism()} cores here: using ${availableParallelism()}`));
   }, 120_000);
 
   it('conformark batch with one broken record writes the rest, names file and line on stderr and exits 1', () => {

@@ -36,9 +36,9 @@ describe('conformark inspect', () => {
     const missing = run('inspect', 'no/such/file.xyz');
     expect(missing.status).toBe(2);
     expect(missing.stderr).toBe('conformark: no/such/file.xyz: no such file\n');
-    const broken = run('inspect', 'test/data/bad/wrong-count.xyz');
+    const broken = run('inspect', 'test/data/bad/truncated.xyz');
     expect(broken.status).toBe(2);
-    expect(broken.stderr).toBe('conformark: test/data/bad/wrong-count.xyz:1: expected 3 atoms, found 2\n');
+    expect(broken.stderr).toBe('conformark: test/data/bad/truncated.xyz:1: expected 3 atoms, found 2\n');
     expect(broken.stdout).toBe('');
   });
 });

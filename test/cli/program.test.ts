@@ -8,7 +8,7 @@ const run = (...args: string[]) => spawnSync('node', ['bin/conformark.js', ...ar
 describe('buildProgram', () => {
   it('buildProgram registers every command the README documents', () => {
     const names = buildProgram().commands.map((c) => c.name()).sort();
-    expect(names).toEqual(['batch', 'build', 'chair', 'demo', 'ensemble', 'inspect', 'newman', 'trajectory']);
+    expect(names).toEqual(['batch', 'build', 'chair', 'demo', 'ensemble', 'explore', 'inspect', 'newman', 'trajectory']);
   });
 
   it('buildProgram gives each command the options the README names', () => {
@@ -22,6 +22,7 @@ describe('buildProgram', () => {
     expect(options('trajectory')).toEqual(expect.arrayContaining(['--ring', '--dir', '--stride', '--from', '--to', '--timestep', '--torsion']));
     expect(options('build')).toEqual(expect.arrayContaining(['--output', '--conformers', '--seed', '--ring-forms']));
     expect(options('demo')).toEqual(expect.arrayContaining(['--dir']));
+    expect(options('explore')).toEqual(expect.arrayContaining(['--output', '--title', '--max-size', '--temperature', '--energy-field', '--energy-unit', '--theme', '--angles', '--hydrogens']));
   });
 });
 

@@ -7,9 +7,11 @@
  * degenerate input also run through the binary itself (`cli`).
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { linkSync, mkdtempSync, readdirSync, readFileSync, rmSync, symlinkSync, writeFileSync, copyFileSync } from 'node:fs';
+import { linkSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, symlinkSync, writeFileSync, copyFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { spawnSync } from 'node:child_process';
+import { gzipSync } from 'node:zlib';
 import { COMMANDS } from '../../src/cli/commands/index.js';
 import { cli, cliInProcess, degenerateXyz, leaks, unsafeMarkup } from './robustnessHelpers.js';
 
@@ -23,6 +25,8 @@ const CORPUS: readonly (readonly [string, string])[] = [
   ['bad-conect-text.pdb', "bad-conect-text.pdb:5: expected atom serial numbers in CONECT, found 'two'"],
   ['bad-conect.pdb', 'bad-conect.pdb:5: CONECT refers to atom serial 99, which is not in the file'],
   ['bad-coords.pdb', "bad-coords.pdb:3: x coordinate 'x.957' is not a number (columns 31-38)"],
+  ['few-bonds.sdf', 'few-bonds.sdf:4: counts line says 1 bond, but a bond line follows them (line 9)'],
+  ['few-atoms.sdf', 'few-atoms.sdf:4: counts line says 2 atoms, but an atom line follows them (line 7)'],
   ['bad-counts.sdf', "bad-counts.sdf:4: expected a counts line (atoms, bonds, ..., V2000), found 'x  y  0  0  0  0  0  0  0  0999 V2000'"],
   ['blank.xyz', 'blank.xyz: the file is empty'],
   ['empty.xyz', 'empty.xyz: the file is empty'],
@@ -38,7 +42,6 @@ const CORPUS: readonly (readonly [string, string])[] = [
   ['no-count.xyz', "no-count.xyz:1: expected an atom count, found 'water'"],
   ['no-m-end.sdf', 'no-m-end.sdf:4: record ends before M  END'],
   ['not-a-number.xyz', "not-a-number.xyz:4: y coordinate 'abc' is not a number"],
-  ['one-bad-of-three.sdf', 'one-bad-of-three.sdf:20: bond 2 refers to atom 7, but the record has 3 atoms'],
   ['overlap.pdb', 'overlap.pdb:3: atoms A/HOH1/O (atom 1) and A/HOH1/H1 (atom 2) are 0.10 Å apart inside one residue, closer than 0.4 Å'],
   ['overlap.xyz', 'overlap.xyz:5: atoms 2 (H) and 3 (H) are 0.12 Å apart, closer than 0.4 Å'],
   ['short-line.xyz', "short-line.xyz:3: expected an element and x y z, found 'O 0.000 0.000'"],
@@ -80,13 +83,32 @@ function expectUntouched(folder: string, out: string): void {
 }
 
 describe('conformark on the bad-input corpus', () => {
-  it.each(CORPUS)('conformark inspect %s -o FILE prints one line, exits 2 and keeps FILE', async (file, message) => {
+  /** Files with a good record beside the bad one: inspect reports both and exits 1 (the bad one on stderr). */
+  const PARTLY_GOOD = new Set(['extra-atoms.xyz', 'wrong-count.xyz']);
+
+  it.each(CORPUS.filter(([f]) => !PARTLY_GOOD.has(f)))('conformark inspect %s -o FILE prints one line, exits 2 and keeps FILE', async (file, message) => {
     const { folder, out } = sentinelIn(file);
     const r = await cliInProcess(['inspect', `${BAD}/${file}`, '-o', out]);
     expect(r.stderr).toBe(`conformark: ${BAD}/${message}\n`);
     expect(r.status).toBe(2);
     expect(r.stdout).toBe('');
     expectUntouched(folder, out);
+  });
+
+  it.each(CORPUS.filter(([f]) => PARTLY_GOOD.has(f)))('conformark inspect %s -o FILE reports the good record, prints the bad one and exits 1', async (file, message) => {
+    const { out } = sentinelIn(file);
+    const r = await cliInProcess(['inspect', `${BAD}/${file}`, '-o', out]);
+    expect(r.stderr).toBe(`conformark: ${BAD}/${message}\n`);
+    expect(r.status).toBe(1);
+    expect(readFileSync(out, 'utf8')).toContain(`  error: ${BAD}/${message}\n`);
+  });
+
+  it('conformark inspect one-bad-of-three.sdf -o FILE writes the two good records, prints the bad one and exits 1', async () => {
+    const { out } = sentinelIn('one-bad-of-three.sdf');
+    const r = await cliInProcess(['inspect', `${BAD}/one-bad-of-three.sdf`, '-o', out]);
+    expect(r.stderr).toBe(`conformark: ${BAD}/one-bad-of-three.sdf:20: bond 2 refers to atom 7, but the record has 3 atoms\n`);
+    expect(r.status).toBe(1);
+    expect(readFileSync(out, 'utf8')).toContain(`record 2\n  error: ${BAD}/one-bad-of-three.sdf:20: bond 2 refers to atom 7`);
   });
 
   it.each(NEWMAN_CORPUS)('conformark newman %s --bond 1-2 -o FILE.svg prints the reader error and keeps FILE.svg', async (file) => {
@@ -127,6 +149,37 @@ describe('conformark limits', () => {
     expect(piped.status).toBe(2);
   });
 
+  it('conformark inspect on a gzip text bomb (400 MB of comment lines in 4,000 records) stops at the text limit under a 256 MB heap', async () => {
+    // each record: a water with a 99,000-character comment; gzip members concatenated (RFC 1952 §2.2)
+    const record = gzipSync(`3\n${'c'.repeat(99_000)}\nO 0 0 0\nH 0.96 0 0\nH -0.24 0.93 0\n`);
+    const path = join(dir, 'bomb.xyz.gz');
+    writeFileSync(path, Buffer.concat(Array.from({ length: 4000 }, () => record)));
+    const bin = new URL('../../bin/conformark.js', import.meta.url).pathname;
+    const r = spawnSync(process.execPath, ['--max-old-space-size=256', bin, 'inspect', path], { encoding: 'utf8' });
+    // 64,000,000 characters at 99,000 per record: record 647 (its count line is line 5 × 646 + 1) passes the limit
+    expect(r.stderr).toBe(`conformark: ${path}:${5 * 646 + 1}: record 647: more than 64000000 characters of titles and data fields in all records to hold at once (raise with --max-total-text, option maxTotalText)\n`);
+    expect(r.status).toBe(2);
+  }, 60_000);
+
+  it('conformark newman - on a 600-model PDB from standard input streams it under a 96 MB heap (spooled, as a file is read); the spool is removed', () => {
+    // 600 models × 1,000 atoms, CONECT after the last model (so the models cannot be released as they are read)
+    const atom = (k: number) => {
+      const [x, y, z] = [k === 1 ? 1.5 : 3 * (k % 20), (3 * Math.floor(k / 20)) % 60, 3 * Math.floor(k / 400)];
+      return `HETATM${String(k + 1).padStart(5)}  C   LIG A${String(1 + Math.floor(k / 10)).padStart(4)}    ${x.toFixed(3).padStart(8)}${y.toFixed(3).padStart(8)}${z.toFixed(3).padStart(8)}  1.00  0.00           C  `;
+    };
+    const body = Array.from({ length: 1000 }, (_, k) => atom(k)).join('\n');
+    const models = Array.from({ length: 600 }, (_, m) => `MODEL     ${String(m + 1).padStart(4)}\n${body}\nENDMDL`);
+    const input = gzipSync(`${models.join('\n')}\nCONECT    1    2\nEND\n`);
+    const tmp = join(dir, 'spool-tmp');
+    mkdirSync(tmp);
+    const bin = new URL('../../bin/conformark.js', import.meta.url).pathname;
+    const r = spawnSync(process.execPath, ['--max-old-space-size=96', bin, 'newman', '-', '--bond', '1-2'], { input, encoding: 'utf8', env: { ...process.env, TMPDIR: tmp } });
+    expect(r.stderr).toBe('');
+    expect(r.status).toBe(0);
+    expect(r.stdout).toMatch(/^<svg /);
+    expect(readdirSync(tmp)).toEqual([]);
+  }, 60_000);
+
   it('conformark inspect on an SD record with a 1.2 MB data field stops with data-too-long at the line it passes the cap', async () => {
     const path = join(dir, 'big-field.sdf');
     const water = readFileSync('test/data/good-water.sdf', 'utf8');
@@ -145,6 +198,7 @@ describe('conformark limits', () => {
       [['--max-total-atoms', '5', 'inspect', path], `${path}:6: record 2: more than 5 atoms in all records to hold at once (raise with --max-total-atoms, option maxTotalAtoms)`],
       [['newman', path, '--bond', '1-2', '--max-atoms', '2'], `${path}:1: count line says 3 atoms; the limit is 2 (option maxAtoms)`],
       [['newman', path, '--bond', '1-2', '--max-line-length', '5'], `${path}:3: line is longer than 5 characters`],
+      [['--max-total-text', '5', 'inspect', path], `${path}:11: record 3: more than 5 characters of titles and data fields in all records to hold at once (raise with --max-total-text, option maxTotalText)`],
       [['inspect', path, '--max-records', 'lots'], '--max-records expects a whole number from 1, got "lots"'],
     ];
     for (const [args, message] of cases) {

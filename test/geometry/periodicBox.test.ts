@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { boxFromLengths, longRingBond, makeWhole, nearestImage } from '../../src/geometry/periodicBox.js';
+import { boxFromLengths, boxFromVectors, longRingBond, makeWhole, nearestImage } from '../../src/geometry/periodicBox.js';
 
 describe('boxFromLengths', () => {
   it('boxFromLengths(orthorhombic) gives the diagonal cell and its inverse', () => {
@@ -62,5 +62,23 @@ describe('nearestImage', () => {
     expect(longRingBond(c, ring, limits)).toBeGreaterThanOrEqual(0);
     makeWhole(c, ring, box);
     expect(longRingBond(c, ring, limits)).toBe(-1);
+  });
+});
+
+describe('boxFromVectors', () => {
+  it('boxFromVectors(lower-triangular GROMACS vectors) keeps them and gives lengths and angles', () => {
+    const b = boxFromVectors([30, 0, 0, 15, 15 * Math.sqrt(3), 0, 0, 0, 30])!;
+    expect(Array.from(b.vectors)).toEqual([30, 0, 0, 15, 15 * Math.sqrt(3), 0, 0, 0, 30]);
+    b.lengths.forEach((x) => expect(x).toBeCloseTo(30, 9));
+    [90, 90, 60].forEach((x, k) => expect(b.anglesDeg[k]).toBeCloseTo(x, 9));
+  });
+
+  it('boxFromVectors(a rotated cell) is the same cell in the a-along-x setting; a zero box is null', () => {
+    // the 30 × 20 × 10 box turned 90° about z: a along y
+    const b = boxFromVectors([0, 30, 0, -20, 0, 0, 0, 0, 10])!;
+    expect(b.lengths).toEqual([30, 20, 10]);
+    expect(b.vectors[0]).toBeCloseTo(30, 9);
+    expect(b.vectors[4]).toBeCloseTo(20, 9);
+    expect(boxFromVectors([0, 0, 0, 0, 0, 0, 0, 0, 0])).toBeNull();
   });
 });

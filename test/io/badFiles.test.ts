@@ -28,6 +28,8 @@ const CASES: ReadonlyArray<readonly [string, ReadonlyArray<'ok' | readonly [stri
   ['truncated.sdf', [['truncated', 4, 'expected 3 atoms, found 2']]],
   ['truncated-bonds.sdf', [['truncated', 4, 'expected 2 bonds, found 1']]],
   ['wrong-count.sdf', [['wrong-count', 4, 'expected 4 atoms, found 3']]],
+  ['few-bonds.sdf', [['wrong-count', 4, 'counts line says 1 bond, but a bond line follows them (line 9)']]],
+  ['few-atoms.sdf', [['wrong-count', 4, 'counts line says 2 atoms, but an atom line follows them (line 7)']]],
   ['bad-counts.sdf', [['bad-count', 4, "expected a counts line (atoms, bonds, ..., V2000), found 'x  y  0  0  0  0  0  0  0  0999 V2000'"]]],
   ['nan.sdf', [['bad-number', 6, "x coordinate 'NaN' is not a number"]]],
   ['unknown-element.sdf', [['unknown-element', 6, "unknown element 'Qq'"]]],

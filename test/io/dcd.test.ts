@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { dcdFrames, dcdHeader } from '../../src/io/dcd.js';
@@ -136,6 +136,15 @@ describe('analyzeTrajectory(DCD)', () => {
     times.forEach((t, k) => expect(t).toBeCloseTo(1000 + 2 * k, 4));
     const err = await analyzeTrajectory(join(FIX, 'ring.dcd'), { dir: join(dir, 'st2'), topology: join(FIX, 'ring.pdb'), startTime: '-3 ps' }).catch((e: unknown) => e);
     expect((err as ConformarkError).issues[0]!.message).toMatch(/--start-time expects/);
+  });
+
+  it('analyzeTrajectory(truncated dcd) into a folder of an earlier run leaves that run byte for byte, no temporary files', async () => {
+    const out = join(dir, 'kept');
+    await analyzeTrajectory(join(FIX, 'ring.dcd'), { dir: out, topology: join(FIX, 'ring.pdb') });
+    const before = Object.fromEntries(readdirSync(out).map((f) => [f, readFileSync(join(out, f), 'utf8')]));
+    const err = await analyzeTrajectory(join(dir, 'cut.dcd'), { dir: out, topology: join(FIX, 'ring.pdb'), startTime: '1 ns' }).catch((e: unknown) => e);
+    expect((err as ConformarkError).issues[0]!.message).toMatch(/frame 5 is truncated/);
+    expect(Object.fromEntries(readdirSync(out).map((f) => [f, readFileSync(join(out, f), 'utf8')]))).toEqual(before);
   });
 
   it('analyzeTrajectory(dcd) without a topology asks for one', async () => {

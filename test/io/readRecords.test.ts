@@ -93,6 +93,22 @@ describe('readRecords', () => {
   });
 });
 
+describe('readRecords(standard input, PDB)', () => {
+  it('readRecords("-") on a multi-model PDB with CONECT at the end gives what reading the file gives (spooled to a private file)', () => {
+    const model = (m: number) => `MODEL        ${m}\nHETATM    1  O   HOH A   1       0.000   0.000   0.${m}00  1.00  0.00           O\nHETATM    2  H1  HOH A   1       0.957   0.000   0.000  1.00  0.00           H\nHETATM    3  H2  HOH A   1      -0.240   0.927   0.000  1.00  0.00           H\nENDMDL\n`;
+    const pdb = `${[1, 2, 3].map(model).join('')}CONECT    1    2    3\nEND\n`;
+    writeFileSync(join(dir, 'three.pdb'), pdb);
+    const script = `import { readRecords } from './src/io/readRecords.ts';
+      for await (const m of readRecords(process.argv[1])) console.log(m.source.file, m.source.index, m.source.line, m.atoms.length, JSON.stringify(m.bonds), m.coords[2]);`;
+    const run = (arg: string, input?: string) => spawnSync(process.execPath, ['--import', 'tsx', '--input-type=module', '-e', script, arg], { input, cwd: join(import.meta.dirname, '../..'), encoding: 'utf8' });
+    const piped = run('-', pdb);
+    const file = run(join(dir, 'three.pdb'));
+    expect(piped.stderr).toBe('');
+    expect(piped.stdout.split('\n').filter(Boolean)).toHaveLength(3);
+    expect(piped.stdout).toBe(file.stdout.split(join(dir, 'three.pdb')).join('-'));
+  });
+});
+
 describe('readFrames', () => {
   it('readFrames(path) yields index, line, coords, title and properties of every frame', async () => {
     writeFileSync(join(dir, 't.xyz'), TRAJ);

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { perceiveBonds, BOND_TOLERANCE_A } from '../../src/perceive/perceiveBonds.js';
-import { elementInfo } from '../../src/model/elements.js';
+import { perceiveBonds, BOND_TOLERANCE_A, METAL_TOLERANCE_A } from '../../src/perceive/perceiveBonds.js';
+import { elementInfo, isMetal } from '../../src/model/elements.js';
 import { ConformarkError } from '../../src/model/errors.js';
 import { molecule, pairs } from './fixtures.js';
 
@@ -10,6 +10,24 @@ const bonded = (a: string, b: string, d: number, toleranceA?: number) =>
   perceiveBonds(pair(a, b, d), toleranceA === undefined ? {} : { toleranceA }).length === 1;
 
 describe('perceiveBonds', () => {
+  it('perceiveBonds bonds a metal only within r_M + r_X + 0.25 Å: no Na···C at 2.79 Å, Na–O 2.41 and Zn–N 2.10 kept', () => {
+    // Cordero radii: Na 1.66, C 0.76, O 0.66, Zn 1.22, N 0.71, S 1.05; the general ε 0.40 would bond Na···C up to 2.82 Å
+    expect(bonded('Na', 'C', 2.79)).toBe(false);
+    expect(bonded('Na', 'C', 2.79, 0.4)).toBe(false);
+    expect(bonded('Na', 'O', 2.41)).toBe(true);
+    expect(bonded('Zn', 'N', 2.1)).toBe(true);
+    expect(bonded('Zn', 'S', 2.33)).toBe(true);
+    expect(bonded('Zn', 'N', 2.2)).toBe(false); // 1.93 + 0.25 = 2.18 Å
+    expect(bonded('C', 'C', 1.9)).toBe(true); // non-metals keep ε 0.40
+    expect(perceiveBonds(pair('Na', 'C', 2.79), { metalToleranceA: 0.4 })).toHaveLength(1);
+    expect(bonded('Na', 'O', 2.45)).toBe(true);
+    expect(bonded('Na', 'O', 2.45, 0.1)).toBe(false); // a smaller general ε also tightens the metal rule
+  });
+
+  it('perceiveBonds rejects a negative metalToleranceA', () => {
+    expect(() => perceiveBonds(pair('Na', 'O', 2.4), { metalToleranceA: -1 })).toThrow(ConformarkError);
+  });
+
   it('perceiveBonds follows the ε = 0.40 Å check table (Cordero et al. 2008, Dalton Trans. 2832; docs/methods.md#bond-perception, derived)', () => {
     expect(BOND_TOLERANCE_A).toBe(0.4);
     expect(bonded('C', 'C', 1.54)).toBe(true);
@@ -25,8 +43,8 @@ describe('perceiveBonds', () => {
   it('perceiveBonds puts the C–C threshold at r_C + r_C + ε = 1.92 Å (derived, docs/methods.md#bond-perception)', () => {
     expect(bonded('C', 'C', 1.915)).toBe(true);
     expect(bonded('C', 'C', 1.925)).toBe(false);
-    expect(bonded('C', 'Fe', 0.76 + 1.32 + 0.39)).toBe(true); // Fe low-spin radius 1.32
-    expect(bonded('C', 'Fe', 0.76 + 1.32 + 0.41)).toBe(false);
+    expect(bonded('C', 'Fe', 0.76 + 1.32 + 0.24)).toBe(true); // Fe low-spin radius 1.32; metal contacts take ε 0.25
+    expect(bonded('C', 'Fe', 0.76 + 1.32 + 0.26)).toBe(false);
   });
 
   it('perceiveBonds rejects pairs closer than 0.4 Å (common practice, no source)', () => {
@@ -99,7 +117,7 @@ describe('perceiveBonds', () => {
     expect(pairs(perceiveBonds(mol)).filter(([a]) => a === 0)).toHaveLength(5);
   });
 
-  it('perceiveBonds on a grid equals the all-pairs test (fast-check, no capped elements)', () => {
+  it('perceiveBonds on a grid equals the all-pairs test, metal contacts at the stricter tolerance (fast-check, no capped elements)', () => {
     const elements = ['N', 'O', 'S', 'Cl', 'Fe', 'Na'];
     const atom = fc.record({
       element: fc.constantFrom(...elements),
@@ -114,7 +132,8 @@ describe('perceiveBonds', () => {
         for (let i = 0; i < list.length; i++) {
           for (let j = i + 1; j < list.length; j++) {
             const d = Math.hypot(list[i]!.x - list[j]!.x, list[i]!.y - list[j]!.y, list[i]!.z - list[j]!.z);
-            const limit = elementInfo(list[i]!.element)!.radius + elementInfo(list[j]!.element)!.radius + eps;
+            const metal = isMetal(list[i]!.element) || isMetal(list[j]!.element);
+            const limit = elementInfo(list[i]!.element)!.radius + elementInfo(list[j]!.element)!.radius + (metal ? Math.min(eps, METAL_TOLERANCE_A) : eps);
             if (d >= 0.4 && d <= limit) expected.push([i, j]);
           }
         }

@@ -56,6 +56,18 @@ describe('renderPng', () => {
     }
   });
 
+  it('renderPng refuses an image over maxPixels (default 64 megapixels) before drawing it, with a ConformarkError', () => {
+    const png = renderPng(svg);
+    const view = new DataView(png.buffer, png.byteOffset);
+    const pixels = view.getUint32(16) * view.getUint32(20); // IHDR width × height
+    expect(() => renderPng(svg, { maxPixels: Math.floor(pixels * 0.9) })).toThrow(expect.objectContaining({ code: 'too-many-pixels' }));
+    expect(renderPng(svg, { maxPixels: Math.ceil(pixels * 1.02) })).toEqual(png);
+    // a page 100 inches square at 300 dpi is 900 megapixels: over the default, refused without allocating it
+    const huge = '<svg xmlns="http://www.w3.org/2000/svg" width="7200pt" height="7200pt" viewBox="0 0 7200 7200"><rect width="10" height="10"/></svg>';
+    expect(() => renderPng(huge)).toThrow(/30000 × 30000 pixels \(900\.0 megapixels\), more than the limit of 64000000/);
+    expect(() => renderPng(svg, { dpi: Number.NaN })).toThrow(expect.objectContaining({ code: 'bad-option' }));
+  });
+
   it('renderPng draws text with the shipped font (labels add ink)', () => {
     const noText = svg.replace(/<text\b[^>]*>[^<]*<\/text>/g, '');
     const ink = (s: string) => {

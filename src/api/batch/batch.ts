@@ -4,12 +4,11 @@
  * reported (manifest `errors`, and in the result for stderr) and the rest is written.
  */
 import { availableParallelism } from 'node:os';
-import { join } from 'node:path';
 import { ConformarkError, usageError, type Warning } from '../../model/errors.js';
 import type { Molecule } from '../../model/molecule.js';
 import type { StreamOptions } from '../../io/readRecords.js';
 import type { HoldOptions } from '../holdLimits.js';
-import { writeAtomic } from '../../io/writeAtomic.js';
+import { OutputFolder, type ManifestKind } from '../../io/outputFolder.js';
 import type { BondSet } from '../../analysis/figureBonds.js';
 import type { CouplingOptions } from '../../analysis/coupling.js';
 import { energySpreadWarning, unitRequest, type EnergyOptions } from '../../io/energy.js';
@@ -26,7 +25,6 @@ import { figureBytes, type FigureFormat } from '../figures/writeFigure.js';
 import { supportTables } from '../tables/supportTables.js';
 import { TABLE_WRITERS, fixed, type TableFormat } from '../tables/tableText.js';
 import { jsonText } from '../jsonText.js';
-import { previousOutputs, removeStale } from './staleOutputs.js';
 
 /** Options of {@link batchFile}. */
 export interface BatchOptions {
@@ -38,6 +36,8 @@ export interface BatchOptions {
   readonly formats?: readonly FigureFormat[];
   /** PNG resolution, dots per inch. Default 300. */
   readonly dpi?: number;
+  /** Most pixels of one PNG figure or sheet. Default 64,000,000. */
+  readonly maxPixels?: number;
   /** Theme object, built-in name or path. Default `column`. */
   readonly theme?: Theme | string;
   /** Prefix before every figure's own id prefix (`<prefix>r01-newman-3-4-`). Default none. */
@@ -50,7 +50,7 @@ export interface BatchOptions {
   readonly sheetColumns?: number;
   /** Table formats. Default `['csv', 'md', 'tex']`; `[]` writes none. */
   readonly tables?: readonly TableFormat[];
-  /** Worker threads for figures. Default min(4, available cores). 1 draws in this thread. */
+  /** Worker threads for figures. Default min(4, available cores); at most the available cores. 1 draws in this thread. */
   readonly jobs?: number;
   /** Workers are used only above this many figures. Default 40. */
   readonly workerThreshold?: number;
@@ -100,6 +100,13 @@ interface Planned extends FigureJob {
 
 const one = (a: number) => a + 1;
 
+/** How `manifest.json` lists what a batch wrote. */
+export const BATCH_MANIFEST: ManifestKind = {
+  name: 'manifest.json',
+  schema: 'conformark/batch@1',
+  files: (doc) => [...(Array.isArray(doc.figures) ? doc.figures : [null]), ...(Array.isArray(doc.tables) ? doc.tables : [null])].map((e) => (e as { path?: unknown } | null)?.path),
+};
+
 /** Figures of one record, in order: Newman per drawn bond, then one ring figure per ring. */
 function plan(a: RecordAnalysis, width: number, prefix: string, lowest: number | null, rings: boolean): Planned[] {
   const label = recordLabel(a.record, width);
@@ -126,8 +133,17 @@ function plan(a: RecordAnalysis, width: number, prefix: string, lowest: number |
  * @example const { manifest } = await batchFile('conformers.sdf', 'si-figures', { bonds: 'rotatable' })
  */
 export async function batchFile(path: string, dir: string, options: BatchOptions = {}): Promise<BatchResult> {
-  const previous = previousOutputs(dir, 'conformark/batch@1');
   const theme = loadTheme(options.theme);
+  const folder = OutputFolder.open(dir, BATCH_MANIFEST);
+  try {
+    return await batchInto(folder, path, theme, options);
+  } catch (err) {
+    folder.abort();
+    throw err;
+  }
+}
+
+async function batchInto(folder: OutputFolder, path: string, theme: Theme, options: BatchOptions): Promise<BatchResult> {
   const formats = options.formats ?? ['svg'];
   const prefix = options.idPrefix ?? '';
   const notes: string[] = [];
@@ -172,10 +188,12 @@ export async function batchFile(path: string, dir: string, options: BatchOptions
   const total = tasks.reduce((n, t) => n + t.jobs.length, 0);
 
   // 3. Draw (on workers when there are many), then write every figure.
-  const threads = total > (options.workerThreshold ?? 40) ? (options.jobs ?? Math.min(4, availableParallelism())) : 1;
+  const cores = availableParallelism();
+  if (options.jobs !== undefined && options.jobs > cores) notes.push(`jobs ${options.jobs} is more than the ${cores} cores here: using ${cores}`);
+  const threads = total > (options.workerThreshold ?? 40) ? Math.min(options.jobs ?? 4, cores) : 1;
   let done = 0;
   options.onProgress?.(0, total);
-  const drawn = await drawTasks(tasks, { theme, formats: formats.filter((f) => f !== 'svg'), dpi: options.dpi }, threads, (n) => {
+  const drawn = await drawTasks(tasks, { theme, formats: formats.filter((f) => f !== 'svg'), dpi: options.dpi, maxPixels: options.maxPixels }, threads, (n) => {
     done += n;
     options.onProgress?.(done, total);
   });
@@ -186,7 +204,7 @@ export async function batchFile(path: string, dir: string, options: BatchOptions
       const fig = drawn[k]![j]!;
       for (const format of formats) {
         const file = `${job.stem}.${format}`;
-        writeAtomic(join(dir, file), format === 'svg' ? `${fig.svg}\n` : fig.files.find((f) => f.format === format)!.data);
+        folder.write(file, format === 'svg' ? `${fig.svg}\n` : fig.files.find((f) => f.format === format)!.data);
         figures.push({ record: job.record, kind: job.kind, bond: job.manifestBond, ring: job.manifestRing, path: file });
       }
       panels.push({ svg: fig.svg, width: fig.width, height: fig.height, caption: job.caption });
@@ -202,7 +220,7 @@ export async function batchFile(path: string, dir: string, options: BatchOptions
       });
       for (const format of formats) {
         const file = `sheet-${s + 1}.${format}`;
-        writeAtomic(join(dir, file), await figureBytes(svg, format, { dpi: options.dpi }));
+        folder.write(file, await figureBytes(svg, format, { dpi: options.dpi, maxPixels: options.maxPixels }));
         figures.push({ record: null, kind: 'sheet', bond: null, ring: null, path: file });
       }
     }
@@ -215,7 +233,7 @@ export async function batchFile(path: string, dir: string, options: BatchOptions
     for (const table of supportTables(analysed.map((r) => r.analysis))) {
       for (const format of tableFormats) {
         const file = `${table.kind}.${format}`;
-        writeAtomic(join(dir, file), TABLE_WRITERS.get(format)!(table));
+        folder.write(file, TABLE_WRITERS.get(format)!(table));
         tables.push({ kind: table.kind, format, path: file });
       }
     }
@@ -226,7 +244,6 @@ export async function batchFile(path: string, dir: string, options: BatchOptions
     tables,
     errors: errors.map(({ record, code, line, message }) => ({ record, code, line, message })),
   };
-  writeAtomic(join(dir, 'manifest.json'), jsonText(manifest));
-  removeStale(dir, previous, new Set([...figures, ...tables].map((f) => f.path)));
+  folder.commit(jsonText(manifest));
   return { manifest, errors, warnings, notes };
 }

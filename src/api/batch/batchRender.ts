@@ -7,6 +7,7 @@ import { existsSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { Worker } from 'node:worker_threads';
 import type { Molecule } from '../../model/molecule.js';
+import { ConformarkError, type Issue } from '../../model/errors.js';
 import type { Theme } from '../../render/theme.js';
 import { figureBytes, type FigureFormat } from '../figures/writeFigure.js';
 import { drawFigure, type FigureKind } from '../figures/figureKinds.js';
@@ -41,6 +42,8 @@ export interface DrawSettings {
   readonly formats: readonly FigureFormat[];
   /** PNG resolution, dots per inch. Default 300. */
   readonly dpi?: number;
+  /** Most pixels of a PNG. Default 64,000,000. */
+  readonly maxPixels?: number;
 }
 
 /** Draws every figure of one record (the unit of work on a worker). */
@@ -50,7 +53,7 @@ export async function drawRecordFigures(task: RecordTask, settings: DrawSettings
   for (const job of task.jobs) {
     const fig = drawFigure(job.kind, { ...prepared, theme: settings.theme, idPrefix: job.idPrefix }, job);
     const files = [];
-    for (const format of settings.formats) files.push({ format, data: await figureBytes(fig.svg, format, { dpi: settings.dpi }) });
+    for (const format of settings.formats) files.push({ format, data: await figureBytes(fig.svg, format, { dpi: settings.dpi, maxPixels: settings.maxPixels }) });
     out.push({ svg: fig.svg, width: fig.width, height: fig.height, files });
   }
   return out;
@@ -103,7 +106,9 @@ async function drawOnWorkers(
               const id = next++;
               worker.postMessage({ id, task: tasks[id] });
             };
-            worker.on('message', (msg: { id: number; result?: DrawnJob[]; error?: string }) => {
+            worker.on('message', (msg: { id: number; result?: DrawnJob[]; error?: string; issues?: Issue[] }) => {
+              // a user error on a worker (a PNG over the pixel cap) stays a user error here
+              if (msg.issues !== undefined) return reject(new ConformarkError(msg.issues));
               if (msg.error !== undefined) return reject(new Error(msg.error));
               results[msg.id] = msg.result!;
               onDone(tasks[msg.id]!.jobs.length);

@@ -3,11 +3,11 @@
  * folder with an index page. Every step is an ordinary library call, so the gallery doubles as a tour of the
  * API; the same inputs give the same bytes, and the committed gallery/ is exactly what this produces.
  */
-import { existsSync, mkdirSync, readdirSync, readFileSync, rmSync, statSync } from 'node:fs';
-import { join, relative, resolve } from 'node:path';
+import { existsSync } from 'node:fs';
+import { relative, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { usageError } from '../../model/errors.js';
-import { writeAtomic } from '../../io/writeAtomic.js';
+import { OutputFolder, type ManifestKind } from '../../io/outputFolder.js';
 import { readRecord, prepareRecord } from '../prepare.js';
 import { newmanFigure } from '../figures/newman.js';
 import { chairFigure } from '../figures/chair.js';
@@ -15,6 +15,7 @@ import { ensembleFile } from '../ensemble/ensemble.js';
 import { ensembleText } from '../ensemble/ensembleText.js';
 import { writeEnsembleFigures } from '../ensemble/ensembleFigures.js';
 import { batchFile } from '../batch/batch.js';
+import { exploreFile } from '../explore/exploreFile.js';
 import { jsonText } from '../jsonText.js';
 import { inspectFile } from '../inspect/inspect.js';
 import { inspectText } from '../inspect/inspectText.js';
@@ -63,9 +64,19 @@ export async function renderDemo(options: DemoOptions = {}): Promise<DemoResult>
     if (!existsSync(path)) throw usageError('missing-example', `demo input ${path} is missing`, path);
     return path;
   };
-  mkdirSync(outDir, { recursive: true });
-  clearOld(outDir);
-  const out = (name: string) => join(outDir, name);
+  const folder = OutputFolder.open(outDir, DEMO_MANIFEST);
+  try {
+    return await demoInto(folder, outDir, input, options);
+  } catch (err) {
+    folder.abort();
+    throw err;
+  }
+}
+
+async function demoInto(folder: OutputFolder, outDir: string, input: (name: string) => string, options: DemoOptions): Promise<DemoResult> {
+  const out = (name: string) => `${outDir}/${name}`;
+  const write = (name: string, data: string) => folder.write(name, data);
+  const nested: string[] = [];
   const sections: GallerySection[] = [];
 
   // 1. W2: the ring-flip ensemble of trans-2-methylcyclohexan-1-ol.
@@ -73,14 +84,15 @@ export async function renderDemo(options: DemoOptions = {}): Promise<DemoResult>
   const w2Low = prepareRecord(await readRecord(w2, 1));
   const w2Flip = await readRecord(w2, 3);
   const w2Boat = await readRecord(w2, 5);
-  writeAtomic(out('w2-newman-c7-c2.svg'), newmanFigure(w2Low.molecule, { bond: [6, 1], graph: w2Low.graph, rings: w2Low.rings, couplings: true, idPrefix: 'w2n-' }).svg);
-  writeAtomic(out('w2-chair-diequatorial.svg'), chairFigure(w2Low.molecule, { idPrefix: 'w2c1-' }).svg);
-  writeAtomic(out('w2-chair-diaxial.svg'), chairFigure(w2Flip, { idPrefix: 'w2c3-' }).svg);
-  writeAtomic(out('w2-twist-boat-projected.svg'), chairFigure(w2Boat, { elevationDeg: 35, idPrefix: 'w2tb-' }).svg);
+  write('w2-newman-c7-c2.svg', newmanFigure(w2Low.molecule, { bond: [6, 1], graph: w2Low.graph, rings: w2Low.rings, couplings: true, idPrefix: 'w2n-' }).svg);
+  write('w2-chair-diequatorial.svg', chairFigure(w2Low.molecule, { idPrefix: 'w2c1-' }).svg);
+  write('w2-chair-diaxial.svg', chairFigure(w2Flip, { idPrefix: 'w2c3-' }).svg);
+  write('w2-twist-boat-projected.svg', chairFigure(w2Boat, { elevationDeg: 35, idPrefix: 'w2tb-' }).svg);
   const ensemble = await ensembleFile(w2);
-  writeAtomic(out('w2-ensemble.txt'), ensembleText(ensemble.report));
-  writeAtomic(out('w2-ensemble.json'), jsonText(ensemble.report));
-  const [sheet, ladder] = writeEnsembleFigures(ensemble, outDir, { idPrefix: 'w2e-' });
+  write('w2-ensemble.txt', ensembleText(ensemble.report));
+  write('w2-ensemble.json', jsonText(ensemble.report));
+  const [sheet, ladder] = writeEnsembleFigures(ensemble, outDir, { idPrefix: 'w2e-', write: folder.writer });
+  write('w2-explore.html', (await exploreFile(w2)).html);
   sections.push({
     id: 'w2',
     title: 'W2 · trans-2-methylcyclohexan-1-ol',
@@ -96,16 +108,18 @@ export async function renderDemo(options: DemoOptions = {}): Promise<DemoResult>
     links: [
       { file: 'w2-ensemble.txt', label: 'ranked table (text)' },
       { file: 'w2-ensemble.json', label: 'ensemble report (conformark/ensemble@1)' },
+      { file: 'w2-explore.html', label: 'explorer page (conformark explore): point at any bond or ring of any conformer' },
     ],
   });
 
   // 2. W3: methyl β-D-glucopyranoside, with the supporting-information tables of all its conformers.
   const w3 = input(DEMO_INPUTS.w3);
   const w3Low = prepareRecord(await readRecord(w3, 1));
-  writeAtomic(out('w3-chair.svg'), chairFigure(w3Low.molecule, { idPrefix: 'w3c-' }).svg);
-  writeAtomic(out('w3-newman-c1-c2.svg'), newmanFigure(w3Low.molecule, { bond: [2, 11], graph: w3Low.graph, rings: w3Low.rings, angles: 'ideal', couplings: true, idPrefix: 'w3n-' }).svg);
-  writeAtomic(out('w3-inspect.txt'), inspectText(await inspectFile(w3, { couplings: true })));
+  write('w3-chair.svg', chairFigure(w3Low.molecule, { idPrefix: 'w3c-' }).svg);
+  write('w3-newman-c1-c2.svg', newmanFigure(w3Low.molecule, { bond: [2, 11], graph: w3Low.graph, rings: w3Low.rings, angles: 'ideal', couplings: true, idPrefix: 'w3n-' }).svg);
+  write('w3-inspect.txt', inspectText(await inspectFile(w3, { couplings: true })));
   const batch = await batchFile(w3, out('w3-si'), { jobs: options.jobs ?? 1, idPrefix: 'w3b-' });
+  nested.push('w3-si/manifest.json', ...[...batch.manifest.figures, ...batch.manifest.tables].map((f) => `w3-si/${f.path}`));
   const tables = batch.manifest.tables.map((t) => ({ file: `w3-si/${t.path}`, label: `${t.kind} (${t.format})` }));
   sections.push({
     id: 'w3',
@@ -122,8 +136,8 @@ export async function renderDemo(options: DemoOptions = {}): Promise<DemoResult>
   // 3. W4: a five-membered ring.
   const w4 = input(DEMO_INPUTS.w4);
   const w4Low = prepareRecord(await readRecord(w4, 1));
-  writeAtomic(out('w4-ring-projected.svg'), chairFigure(w4Low.molecule, { elevationDeg: 30, idPrefix: 'w4r-' }).svg);
-  writeAtomic(out('w4-newman-c2-c6.svg'), newmanFigure(w4Low.molecule, { bond: [1, 5], graph: w4Low.graph, rings: w4Low.rings, idPrefix: 'w4n-' }).svg);
+  write('w4-ring-projected.svg', chairFigure(w4Low.molecule, { elevationDeg: 30, idPrefix: 'w4r-' }).svg);
+  write('w4-newman-c2-c6.svg', newmanFigure(w4Low.molecule, { bond: [1, 5], graph: w4Low.graph, rings: w4Low.rings, idPrefix: 'w4n-' }).svg);
   sections.push({
     id: 'w4',
     title: 'W4 · 2-methyloxolan-3-ol',
@@ -136,49 +150,28 @@ export async function renderDemo(options: DemoOptions = {}): Promise<DemoResult>
   });
 
   // 4. The ring walk: puckering along a (synthetic) trajectory.
-  sections.push(await demoTrajectory(input(DEMO_INPUTS.walk), outDir));
+  const walk = await demoTrajectory(input(DEMO_INPUTS.walk), outDir);
+  nested.push(...walk.files.map((f) => `walk/${f}`));
+  sections.push(walk.section);
 
   // 5. The page.
   const sized = sections.map((s) => ({
     ...s,
-    figures: s.figures.map((f) => ({ ...f, widthPt: svgSizePt(readFileSync(out(f.file), 'utf8')).width })),
+    figures: s.figures.map((f) => ({ ...f, widthPt: svgSizePt(folder.read(f.file)).width })),
   }));
-  writeAtomic(out('index.html'), galleryPage(sized));
-  const files = listFiles(outDir).filter((f) => f !== MARKER);
-  writeAtomic(out(MARKER), jsonText({ schema: 'conformark/demo@1', files }));
+  write('index.html', galleryPage(sized));
+  const files = [...folder.written, ...nested].sort();
+  folder.commit(jsonText({ schema: 'conformark/demo@1', files }), nested);
   return { outDir, files };
 }
 
-/** Marker a demo run leaves in its folder: the files it wrote, so the next run can replace exactly those. */
+/** Marker a demo run leaves in its folder: the files it wrote, so the next run replaces exactly those. */
 const MARKER = '.conformark-demo.json';
 
-/**
- * Removes the files an earlier demo run wrote, as its marker lists them. A non-empty folder without the marker
- * was not made by the demo: refuse rather than delete anything in it.
- */
-function clearOld(dir: string): void {
-  const marker = join(dir, MARKER);
-  if (!existsSync(marker)) {
-    if (readdirSync(dir).length > 0) {
-      throw usageError('demo-dir-not-empty', `${dir} is not empty and was not made by conformark demo: choose an empty or new folder`, dir);
-    }
-    return;
-  }
-  const listed = (JSON.parse(readFileSync(marker, 'utf8')) as { files?: unknown }).files;
-  for (const file of Array.isArray(listed) ? listed : []) {
-    if (typeof file === 'string' && !file.includes('..')) rmSync(join(dir, file), { force: true });
-  }
-  for (const name of readdirSync(dir)) {
-    const path = join(dir, name);
-    if (statSync(path).isDirectory() && readdirSync(path).length === 0) rmSync(path, { recursive: true });
-  }
-}
-
-function listFiles(dir: string, root = dir): string[] {
-  return readdirSync(dir)
-    .flatMap((name) => {
-      const path = join(dir, name);
-      return statSync(path).isDirectory() ? listFiles(path, root) : [relative(root, path)];
-    })
-    .sort();
-}
+/** How the demo's marker lists what it wrote (a non-empty folder without one is refused). */
+export const DEMO_MANIFEST: ManifestKind = {
+  name: MARKER,
+  schema: 'conformark/demo@1',
+  files: (doc) => (Array.isArray(doc.files) ? doc.files : [null]),
+  ownsWholeFolder: 'conformark demo',
+};

@@ -6,8 +6,8 @@ import type { GallerySection } from './galleryPage.js';
 /** The ring walk shipped in examples/ (written by scripts/make-ring-walk.mjs, 0.5 ps between frames). */
 export const DEMO_TRAJECTORY = 'w2-ring-walk.xyz.gz';
 
-/** Runs the trajectory analysis into `outDir/walk` and returns the gallery section that shows it. */
-export async function demoTrajectory(path: string, outDir: string): Promise<GallerySection> {
+/** Runs the trajectory analysis into `outDir/walk`; returns the gallery section that shows it and the files written. */
+export async function demoTrajectory(path: string, outDir: string): Promise<{ section: GallerySection; files: readonly string[] }> {
   const summary = await analyzeTrajectory(path, { dir: join(outDir, 'walk'), ring: '1', timestep: '0.5 ps' });
   const percent = (shape: string) => `${((summary.occupancy[shape] ?? 0) * 100).toFixed(1)} %`;
   const figure = (name: string) => summary.files.find((f) => f.startsWith(name) && f.endsWith('.svg'));
@@ -16,7 +16,7 @@ export async function demoTrajectory(path: string, outDir: string): Promise<Gall
     ['time-series', 'θ and φ against time, with a band for each run of one shape.'],
     ['occupancy', 'Fraction of frames in each shape.'],
   ];
-  return {
+  const section: GallerySection = {
     id: 'walk',
     title: 'Ring walk · a synthetic trajectory',
     text: `${summary.frames.analysed} frames, 0.5 ps apart, of a cyclohexane ring built with the inverse Cremer–Pople formula (a scripted stand-in for a simulation): chair ${percent('chair')}, twist-boat ${percent('twist-boat')} of the frames.`,
@@ -26,4 +26,5 @@ export async function demoTrajectory(path: string, outDir: string): Promise<Gall
     }),
     links: summary.files.filter((f) => !f.endsWith('.svg')).map((f) => ({ file: `walk/${f}`, label: f })),
   };
+  return { section, files: summary.files };
 }

@@ -24,6 +24,8 @@ export interface EnsembleFigureOptions {
   readonly idPrefix?: string;
   /** Panels per sheet. Default 24. */
   readonly sheetSize?: number;
+  /** Writes one file (path, bytes). Default `writeAtomic`; a command that owns the folder stages through it. */
+  readonly write?: (path: string, data: string) => void;
 }
 
 /** The panel drawn for a conformer, or `null` when it has neither a ring nor a bond to show. */
@@ -43,6 +45,7 @@ export function writeEnsembleFigures(result: EnsembleResult, dir: string, option
   const { conformers } = result.report;
   const width = Math.max(2, String(conformers.reduce((m, c) => Math.max(m, c.record), 0)).length);
   const label = (n: number) => `r${String(n).padStart(width, '0')}`;
+  const write = options.write ?? writeAtomic;
   const written: string[] = [];
   const panels: ContactPanel[] = [];
   conformers.forEach((c, i) => {
@@ -59,12 +62,12 @@ export function writeEnsembleFigures(result: EnsembleResult, dir: string, option
   for (let s = 0; s * size < panels.length; s++) {
     const svg = contactSheet(panels.slice(s * size, (s + 1) * size), { theme, idPrefix: `${prefix}sheet-${s + 1}-`, title: 'Conformers in energy order' });
     const file = `ensemble-sheet-${s + 1}.svg`;
-    writeAtomic(join(dir, file), `${svg}\n`);
+    write(join(dir, file), `${svg}\n`);
     written.push(file);
   }
   const levels = conformers.filter((c) => c.duplicateOf === null).map((c) => ({ label: label(c.record), relativeEnergy: c.relativeEnergy, population: c.population }));
   const scene = layoutEnergyLadder(levels, { unit: result.report.unit, metrics: sceneMetrics(theme), measure: measureText });
-  writeAtomic(join(dir, 'energy-ladder.svg'), `${renderSvg(scene, theme, { idPrefix: `${prefix}ladder-` })}\n`);
+  write(join(dir, 'energy-ladder.svg'), `${renderSvg(scene, theme, { idPrefix: `${prefix}ladder-` })}\n`);
   written.push('energy-ladder.svg');
   return written;
 }

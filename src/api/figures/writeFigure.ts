@@ -19,6 +19,8 @@ export interface WriteFigureOptions {
   readonly format?: FigureFormat;
   /** PNG resolution, dots per inch (the figure keeps its print size). Default 300. */
   readonly dpi?: number;
+  /** Most pixels of a PNG. Default 64,000,000. */
+  readonly maxPixels?: number;
 }
 
 /** Format of an output path from its extension; a clear error for anything else. */
@@ -29,9 +31,9 @@ export function figureFormat(path: string): FigureFormat {
 }
 
 /** The bytes of an SVG figure in the given format. */
-export async function figureBytes(svg: string, format: FigureFormat, options: { readonly dpi?: number } = {}): Promise<string | Uint8Array> {
+export async function figureBytes(svg: string, format: FigureFormat, options: { readonly dpi?: number; readonly maxPixels?: number } = {}): Promise<string | Uint8Array> {
   if (format === 'svg') return svg.endsWith('\n') ? svg : `${svg}\n`;
-  if (format === 'png') return renderPng(svg, options.dpi === undefined ? {} : { dpi: options.dpi });
+  if (format === 'png') return renderPng(svg, { ...(options.dpi === undefined ? {} : { dpi: options.dpi }), ...(options.maxPixels === undefined ? {} : { maxPixels: options.maxPixels }) });
   return renderPdf(svg);
 }
 

@@ -4,6 +4,7 @@ import { COUPLING_METHOD_NAMES } from '../../analysis/coupling.js';
 import type { ReportRing } from '../../analysis/ringReport.js';
 import type { InspectReport } from './inspect.js';
 import { safeText } from '../../layout/text/safeText.js';
+import { formatIssue } from '../../model/errors.js';
 
 const fixed = (v: number | null, digits: number, unit = ''): string => (v === null ? '—' : `${v.toFixed(digits)}${unit}`);
 const signed = (v: number | null): string => (v === null ? '—' : `${v >= 0 ? '+' : '−'}${Math.abs(v).toFixed(1)}`);
@@ -13,9 +14,18 @@ const signed = (v: number | null): string => (v === null ? '—' : `${v >= 0 ? '
  * @example process.stdout.write(inspectText(await inspectFile('x.sdf')))
  */
 export function inspectText(report: InspectReport): string {
-  const n = report.records.length;
-  const head = `${report.source.path} (${report.source.format}): ${n} record${n === 1 ? '' : 's'}`;
-  return `${[head, ...report.records.map(recordText)].join('\n\n')}\n`;
+  const bad = [...new Set(report.errors.map((e) => e.record))];
+  const n = report.records.length + bad.length;
+  const errors = bad.length > 0 ? ` (${bad.length} with an error, not analysed)` : '';
+  const head = `${report.source.path} (${report.source.format}): ${n} record${n === 1 ? '' : 's'}${errors}`;
+  // good and bad records in file order, each bad one as its error lines
+  const blocks: { at: number; text: string }[] = report.records.map((r) => ({ at: r.index, text: recordText(r) }));
+  for (const record of bad) {
+    const lines = report.errors.filter((e) => e.record === record).map((e) => `  error: ${safeText(formatIssue(e), 1000).text}`);
+    blocks.push({ at: record ?? Infinity, text: [`record ${record}`, ...lines].join('\n') });
+  }
+  blocks.sort((p, q) => p.at - q.at);
+  return `${[head, ...blocks.map((b) => b.text)].join('\n\n')}\n`;
 }
 
 function atomLabel(record: RecordReport, id: number): string {
@@ -27,16 +37,19 @@ function atomLabel(record: RecordReport, id: number): string {
 function recordText(record: RecordReport): string {
   const perceived = record.bonds.some((b) => b.perceived);
   const nr = record.rings.length;
+  const metal = record.bonds.filter((b) => b.coordination).length;
+  const aside = record.setAsideRings.length;
   const facts = [
     `${record.atoms.length} atoms`,
-    `${record.bonds.length} bonds ${perceived ? 'perceived from coordinates' : 'from the file'}`,
-    `${nr} ring${nr === 1 ? '' : 's'}`,
+    `${record.bonds.length} bonds ${perceived ? 'perceived from coordinates' : 'from the file'}${metal > 0 ? ` (${metal} to metals)` : ''}`,
+    `${nr} ring${nr === 1 ? '' : 's'}${aside > 0 ? ` (+${aside} not analysed)` : ''}`,
   ];
   if (record.energy) facts.push(`energy ${record.energy.value} ${record.energy.unit ?? '(unit unknown)'} (${record.energy.field})`);
   // titles come from files: no terminal control sequences, bounded length
   const title = safeText(record.title).text;
   const lines = [`record ${record.index}${title ? `  "${title}"` : ''}`, `  ${facts.join(' · ')}`];
   for (const ring of record.rings) lines.push(...ringText(record, ring));
+  for (const ring of record.setAsideRings) lines.push(`  not analysed: ${ring.message}`);
   if (record.couplings && record.couplings.length > 0) {
     const method = record.couplings[0]!.method;
     lines.push(`  ³J(H,H) predictions, ${COUPLING_METHOD_NAMES.get(method) ?? method} (estimates, typical error about 1 Hz)`);

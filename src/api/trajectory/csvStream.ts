@@ -1,29 +1,30 @@
 /**
- * A text file written as a stream through a temporary file in the same folder, renamed into place only by
- * `commit()`: a run that fails half-way leaves no half-written table and keeps any older one.
+ * A text file written as a stream through a temporary file in the same folder (exclusive create, every write
+ * checked, fsync), renamed into place only by `commit()`: a run that fails half-way (a full disk included)
+ * leaves no half-written table and keeps any older one.
  */
-import { closeSync, mkdirSync, openSync, renameSync, rmSync, writeSync } from 'node:fs';
-import { basename, dirname, join, resolve } from 'node:path';
-import { usageError } from '../../model/errors.js';
-import { isProtected } from '../../io/writeAtomic.js';
+import { dirname, resolve } from 'node:path';
+import { checkTarget, makeFolders } from '../../io/writeAtomic.js';
+import { TempFile } from '../../io/tempFile.js';
 
 const FLUSH_CHARS = 1 << 16;
-let counter = 0;
 
 /**
  * @example const out = new TextStream('out/table.csv'); out.write('a,b\n'); out.commit();
  */
 export class TextStream {
-  private readonly tmp: string;
-  private fd: number | null;
+  private readonly file: TempFile;
   private buffer = '';
 
   constructor(readonly path: string) {
-    if (isProtected(path)) throw usageError('overwrite-input', 'refusing to overwrite the input file', path);
-    const dir = dirname(resolve(path));
-    mkdirSync(dir, { recursive: true });
-    this.tmp = join(dir, `.${basename(path)}.${process.pid}.${++counter}.tmp`);
-    this.fd = openSync(this.tmp, 'w');
+    checkTarget(path);
+    makeFolders(dirname(resolve(path)));
+    this.file = new TempFile(resolve(path), path);
+  }
+
+  /** The temporary file's path (for a caller that renames several files together). */
+  get temporary(): TempFile {
+    return this.file;
   }
 
   /** Appends text (buffered; flushed in blocks of about 64 K characters). */
@@ -33,23 +34,25 @@ export class TextStream {
   }
 
   private flush(): void {
-    if (this.fd !== null && this.buffer !== '') writeSync(this.fd, this.buffer);
+    if (this.buffer !== '') this.file.write(this.buffer);
     this.buffer = '';
+  }
+
+  /** Writes what is left, flushes it to the disk and closes the file, not yet renamed (see `temporary`). */
+  finish(): void {
+    this.flush();
+    this.file.finish();
   }
 
   /** Writes what is left and renames the file into place. */
   commit(): void {
-    this.flush();
-    if (this.fd !== null) closeSync(this.fd);
-    this.fd = null;
-    renameSync(this.tmp, this.path);
+    this.finish();
+    this.file.moveIntoPlace();
   }
 
   /** Drops the temporary file (after a failure). Safe to call twice or after `commit`. */
   abort(): void {
-    if (this.fd !== null) closeSync(this.fd);
-    this.fd = null;
     this.buffer = '';
-    rmSync(this.tmp, { force: true });
+    this.file.remove();
   }
 }

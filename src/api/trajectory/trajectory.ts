@@ -3,36 +3,36 @@
  * bonds, ring and numbering; each analysed frame then costs one Cremer–Pople kernel call, one shape lookup, a
  * CSV line and a few counters. Writes `puckering.csv`, `summary.json` and the figures into a folder.
  */
-import { resolve } from 'node:path';
 import { ConformarkError, ParseError, usageError, type Warning } from '../../model/errors.js';
 import type { FormatName } from '../../model/molecule.js';
 import type { Frame } from '../../io/readFrames.js';
 import type { ReadOptions } from '../../io/limits.js';
 import { protectInput } from '../../io/writeAtomic.js';
-import { PHASE_THRESHOLD } from '../../geometry/cremerPople.js';
-import { PuckerValues } from '../../geometry/puckerKernel.js';
+import { OutputFolder, type ManifestKind } from '../../io/outputFolder.js';
 import { torsionAt } from '../../geometry/torsionAt.js';
-import { longRingBond, makeWhole, type PeriodicBox } from '../../geometry/periodicBox.js';
-import { PLANAR_FORM, PUCKERED_FORM } from '../../analysis/shapeTable.js';
-import { TrajectoryStats, type DwellStats } from '../../analysis/trajectoryStats.js';
+import { makeWhole, type PeriodicBox } from '../../geometry/periodicBox.js';
+import type { DwellStats } from '../../analysis/trajectoryStats.js';
 import type { RingShapeOptions } from '../../analysis/ringShape.js';
 import type { FigureFormat } from '../figures/writeFigure.js';
 import type { Theme } from '../../render/theme.js';
-import { openTrajectory, type SourceFrame } from './trajectorySource.js';
+import { openTrajectory, type BinaryFormat, type SourceFrame, type TrajectorySource } from './trajectorySource.js';
 import { TextStream } from './csvStream.js';
 import { TrajectoryRows } from './trajectoryRows.js';
 import { convertTime, parseStartTime, parseTimestep, type Timestep } from './timestep.js';
-import { trajectorySetup } from './trajectorySetup.js';
-import { FrameBoxes, parseBox, ringBondLimits } from './trajectoryBox.js';
-import { TrajectoryPlots } from './trajectoryPlots.js';
-import { SHAPE_ORDER } from './trajectoryTheme.js';
+import { trajectorySetup, type RingResidue, type TrajectorySetup } from './trajectorySetup.js';
+import { FrameBoxes, parseBox } from './trajectoryBox.js';
+import { RingTrack } from './ringTrack.js';
 import { writeTrajectoryFiles } from './trajectoryOutput.js';
 
 /** Options of `analyzeTrajectory`. */
 export interface TrajectoryOptions extends RingShapeOptions {
   /** Output folder (created). Required. */
   readonly dir: string;
-  /** Ring: its number as `inspect` lists it, or an ordered atom list `1-2-3-4-5-6`. Default `1`. */
+  /**
+   * Ring: its number as `inspect` lists it, an ordered atom list `1-2-3-4-5-6` (atom tokens as in
+   * `selectAtom`), the ring(s) of a residue `A/PRO42/`, or every ring of the residues with given names
+   * `name:BGC,NAG` (each followed and reported separately). Default `1`.
+   */
   readonly ring?: string;
   /** Analyse every Nth frame, counted from `from`. Default 1. */
   readonly stride?: number;
@@ -50,6 +50,8 @@ export interface TrajectoryOptions extends RingShapeOptions {
   readonly formats?: readonly FigureFormat[];
   /** PNG resolution, dots per inch. Default 300. */
   readonly dpi?: number;
+  /** Most pixels of one PNG figure. Default 64,000,000. */
+  readonly maxPixels?: number;
   /** Theme object, built-in name or path. Default `column`. */
   readonly theme?: Theme | string;
   /** Bond tolerance for perception on frame 1, Å. Default 0.40. */
@@ -58,7 +60,7 @@ export interface TrajectoryOptions extends RingShapeOptions {
   readonly maxAmplitudeDeg?: number;
   /**
    * Periodic box for every frame, `"a b c"` or `"a b c α β γ"` (Å, degrees), or a box object. Default: the
-   * file's own cell (PDB CRYST1) where it has one. With a box, the ring (and each torsion) is made whole by
+   * file's own cell (DCD/XTC/TRR box, GRO box line, PDB CRYST1) where it has one. With a box, the ring (and each torsion) is made whole by
    * the minimum image along its bonds in every frame; without one, a ring bond longer than the bond cut-off
    * stops the run.
    */
@@ -72,9 +74,30 @@ export interface TrajectoryOptions extends RingShapeOptions {
 }
 
 /** What `analyzeTrajectory` returns (the content of `summary.json` plus the files written). */
+/** The statistics of one followed ring. */
+export interface RingSummary {
+  /** `CHX2`, `A_PRO42`, `ring1`: the prefix of its CSV columns and figure names when several rings are followed. */
+  readonly tag: string;
+  readonly label: string;
+  readonly residue: RingResidue | null;
+  readonly atoms: readonly number[];
+  readonly size: number;
+  readonly locants: readonly string[];
+  readonly referenceRule: string;
+  readonly occupancy: Readonly<Record<string, number>>;
+  readonly counts: Readonly<Record<string, number>>;
+  readonly transitions: Readonly<Record<string, Readonly<Record<string, number>>>>;
+  readonly dwell: Readonly<Record<string, DwellStats>>;
+  readonly forms: {
+    readonly occupancy: Readonly<Record<string, number>>;
+    readonly transitions: Readonly<Record<string, Readonly<Record<string, number>>>>;
+    readonly dwell: Readonly<Record<string, DwellStats>>;
+  };
+}
+
 export interface TrajectorySummary {
   readonly schema: 'conformark/trajectory@1';
-  readonly source: { readonly path: string; readonly format: FormatName | 'dcd' | null; readonly topology: string | null };
+  readonly source: { readonly path: string; readonly format: FormatName | BinaryFormat | null; readonly topology: string | null };
   readonly ring: { readonly atoms: readonly number[]; readonly size: number; readonly locants: readonly string[]; readonly referenceRule: string };
   readonly frames: { readonly read: number; readonly analysed: number; readonly first: number; readonly last: number; readonly from: number; readonly to: number | null; readonly stride: number };
   readonly timestep: Timestep | null;
@@ -92,25 +115,23 @@ export interface TrajectorySummary {
     readonly transitions: Readonly<Record<string, Readonly<Record<string, number>>>>;
     readonly dwell: Readonly<Record<string, DwellStats>>;
   };
+  /** Every followed ring (the top-level `ring`, `occupancy` … `forms` repeat the first). */
+  readonly rings: readonly RingSummary[];
   readonly torsions: readonly string[];
   readonly warnings: readonly Warning[];
   /** Paths written (relative to `dir`). */
   readonly files: readonly string[];
 }
 
+/** How `summary.json` lists what a trajectory run wrote. */
+export const TRAJECTORY_MANIFEST: ManifestKind = {
+  name: 'summary.json',
+  schema: 'conformark/trajectory@1',
+  files: (doc) => (Array.isArray(doc.files) ? doc.files : [null]).filter((f) => f !== 'summary.json'),
+};
+
 function frameIssue(path: string, frame: Frame, code: string, message: string): ConformarkError {
   return new ConformarkError({ code, file: path, line: frame.line || null, message: `frame ${frame.index} ${message}` });
-}
-
-/** The error for a ring bond longer than the bond cut-off (after the minimum image when there is a box). */
-function brokenRing(path: string, frame: Frame, c: Float64Array, ring: Int32Array, k: number, boxed: boolean): ConformarkError {
-  const i = ring[k]!, j = ring[(k + 1) % ring.length]!;
-  const d = Math.hypot(c[3 * j]! - c[3 * i]!, c[3 * j + 1]! - c[3 * i + 1]!, c[3 * j + 2]! - c[3 * i + 2]!);
-  const bond = `ring bond ${i + 1}-${j + 1} is ${d.toFixed(2)} Å`;
-  const message = boxed
-    ? `ring broken at frame ${frame.index}: ${bond} even at its nearest periodic image (wrong box?)`
-    : `ring broken across the periodic box at frame ${frame.index} (${bond}): give the box (--box "a b c") or unwrap the trajectory`;
-  return new ConformarkError({ code: 'ring-broken', file: path, line: frame.line || null, message });
 }
 
 /** Adds "frame N:" to a reader error about the frame after `last`. */
@@ -132,40 +153,51 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
   if (to < from) throw usageError('bad-option', `--to ${to} is before --from ${from}`);
   const given = typeof options.timestep === 'string' ? parseTimestep(options.timestep) : options.timestep ?? null;
   protectInput(path);
+  if (options.topology !== undefined) protectInput(options.topology);
   // 2. Frame 1 fixes bonds, ring, numbering and torsions.
   const source = await openTrajectory(path, options.topology, options.read);
+  let folder: OutputFolder | null = null;
+  try {
+    const timestep: Timestep | null = given ?? (source.timestepPs !== null ? { value: +source.timestepPs.toPrecision(9), unit: 'ps' } : null);
+    const setup = trajectorySetup(source.first, { ...options, ring: options.ring ?? '1', torsions: options.torsions ?? [] });
+    folder = OutputFolder.open(options.dir, TRAJECTORY_MANIFEST);
+    return await analyseInto(folder, path, source, setup, { ...options, stride, from, to, timestep });
+  } catch (err) {
+    folder?.abort();
+    await source.frames.return?.(undefined);
+    throw err;
+  }
+}
+
+interface Resolved extends Omit<TrajectoryOptions, 'timestep'> {
+  readonly stride: number;
+  readonly from: number;
+  readonly to: number;
+  readonly timestep: Timestep | null;
+}
+
+async function analyseInto(folder: OutputFolder, path: string, source: TrajectorySource, setup: TrajectorySetup, options: Resolved): Promise<TrajectorySummary> {
+  const { stride, from, to, timestep } = options;
   const { first } = source;
-  const timestep: Timestep | null = given ?? (source.timestepPs !== null ? { value: +source.timestepPs.toPrecision(9), unit: 'ps' } : null);
-  const setup = trajectorySetup(first, { ...options, ring: options.ring ?? '1', torsions: options.torsions ?? [] });
-  const { ring, kernel, table, torsions } = setup;
-  const n = ring.length;
+  const { torsions } = setup;
+  const tracks = setup.rings.map((r) => new RingTrack(r, first, { stride, timestep: timestep?.value, maxAmplitudeDeg: options.maxAmplitudeDeg ?? 60, toleranceA: options.toleranceA }));
+  const several = tracks.length > 1;
   const startGiven = typeof options.startTime === 'string' ? parseStartTime(options.startTime) : options.startTime ?? null;
   const start = !timestep ? 0 : startGiven ? convertTime(startGiven.value, startGiven.unit, timestep.unit) : source.startPs !== null ? convertTime(source.startPs, 'ps', timestep.unit) : 0;
-  const maxRingAtom = Math.max(...ring, ...torsions.flat());
-  const dir = resolve(options.dir);
-  const csv = new TextStream(resolve(dir, 'puckering.csv'));
+  const maxRingAtom = Math.max(...setup.rings.flatMap((r) => Array.from(r.ring)), ...torsions.flat());
+  const csv = new TextStream(folder.path('puckering.csv'));
+  folder.adopt('puckering.csv', csv.temporary);
   const timeColumn = timestep ? [`time_${timestep.unit}`] : [];
-  const fiveColumns = n === 5 ? ['P', 'tauM'] : [];
-  csv.write(`${['frame', ...timeColumn, 'Q', 'thetaDeg', 'phiDeg', ...fiveColumns, 'shape', 'descriptor', ...setup.torsionColumns].join(',')}\n`);
+  const ringColumns = tracks.flatMap((t) => t.columns(several ? `${t.setup.tag}_` : ''));
+  csv.write(`${['frame', ...timeColumn, ...ringColumns, ...setup.torsionColumns].join(',')}\n`);
   const rows = new TrajectoryRows(csv);
-  const stats = new TrajectoryStats({ stride, timestep: timestep?.value });
-  const formStats = new TrajectoryStats({ stride, timestep: timestep?.value });
-  const plots = new TrajectoryPlots(n, options.maxAmplitudeDeg ?? 60);
-  const catOf = (form: number) => SHAPE_ORDER.indexOf(table.shapeOf(form) as (typeof SHAPE_ORDER)[number]);
-  const formCat = table.shapes.map((_, i) => catOf(i));
-  const planarCat = catOf(PLANAR_FORM);
-  const puckeredCat = catOf(PUCKERED_FORM);
-  const csvDescriptor = table.descriptors.map((d) => (d === null ? '' : /[",]/.test(d) ? `"${d.replace(/"/g, '""')}"` : d));
-  const v = new PuckerValues();
   const optionBox = typeof options.box === 'string' ? parseBox(options.box) : options.box ?? null;
-  const fileBoxes = !optionBox && !source.binary && first.source.format === 'pdb' ? new FrameBoxes() : null;
-  const limits = ringBondLimits(first, ring, options.toleranceA);
+  const fileBoxes = !optionBox && !source.binary && (first.source.format === 'pdb' || first.source.format === 'gro') ? new FrameBoxes() : null;
   let boxedFrames = 0;
   let read = 0;
   let analysed = 0;
   let firstAnalysed = 0;
   let lastAnalysed = 0;
-  let planarFrames = 0;
   const it = source.frames;
   try {
     // 3. The stream: one line and a few counters per analysed frame.
@@ -192,41 +224,17 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
       const box = optionBox ?? frame.cell ?? fileBoxes?.of(frame.properties) ?? null;
       if (box) {
         boxedFrames++;
-        makeWhole(c, ring, box);
+        for (const t of tracks) makeWhole(c, t.setup.ring, box);
         for (const t of torsions) makeWhole(c, t, box);
       }
-      const broken = longRingBond(c, ring, limits);
-      if (broken >= 0) throw brokenRing(path, frame, c, ring, broken, box !== null);
-      if (!kernel.measure(c, ring, v) || !Number.isFinite(v.Q)) {
-        throw frameIssue(path, frame, 'degenerate-ring', Number.isFinite(v.Q) ? 'has collinear ring atoms' : 'has non-finite ring atom coordinates');
-      }
-      const form = table.classify(v.Q, v.q2, v.thetaDeg, v.phaseDeg, kernel.displacements);
-      const planar = form === PLANAR_FORM;
-      if (planar) planarFrames++;
-      const shape = table.shapeOf(form);
-      const phi = !planar && n > 4 && v.q2 >= PHASE_THRESHOLD ? v.phaseDeg : NaN;
+      for (const t of tracks) t.check(path, frame, c, box !== null);
       // the CSV row, written as bytes (no string per number: see TrajectoryRows)
       rows.number(idx, 0);
       if (timestep) {
         rows.comma();
         rows.number(start + (idx - 1) * timestep.value, 6);
       }
-      rows.comma();
-      rows.number(v.Q, 4);
-      rows.comma();
-      if (!planar && n === 6) rows.number(v.thetaDeg, 2);
-      rows.comma();
-      if (!Number.isNaN(phi)) rows.number(phi, 2);
-      if (n === 5) {
-        rows.comma();
-        if (!planar && !Number.isNaN(v.pDeg)) rows.number(v.pDeg, 2);
-        rows.comma();
-        if (!planar && !Number.isNaN(v.pDeg)) rows.number(v.tauMDeg, 2);
-      }
-      rows.comma();
-      rows.text(shape);
-      rows.comma();
-      if (form >= 0) rows.text(csvDescriptor[form]!);
+      for (const t of tracks) t.measure(path, frame, c, rows);
       for (let k = 0; k < torsions.length; k++) {
         const [a, b, cc, d] = torsions[k]!;
         const t = torsionAt(c, a, b, cc, d);
@@ -234,9 +242,6 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
         if (!Number.isNaN(t)) rows.number(t, 2);
       }
       rows.newline();
-      stats.add(shape);
-      formStats.add(table.descriptorOf(form) ?? shape);
-      plots.add(idx, v, phi, planar, form >= 0 ? formCat[form]! : planar ? planarCat : puckeredCat);
       if (analysed++ === 0) firstAnalysed = idx;
       lastAnalysed = idx;
     }
@@ -246,34 +251,54 @@ export async function analyzeTrajectory(path: string, options: TrajectoryOptions
       throw usageError('no-frames', `no frames to analyse ${range}: the file has ${read} frame${read === 1 ? '' : 's'}`, path);
     }
     rows.flush();
-    csv.commit();
+    csv.finish();
   } catch (err) {
     csv.abort();
-    await it.return?.(undefined);
     throw err;
   }
   // 4. Summary and figures.
   const warnings: Warning[] = [];
-  if (planarFrames > 0) warnings.push({ code: 'ring-nearly-planar', message: `${planarFrames} frames have a nearly planar ring (shape planar, no θ or φ)` });
-  if (plots.clamped > 0) warnings.push({ code: 'amplitude-beyond-wheel', message: `${plots.clamped} frames have τm beyond ${options.maxAmplitudeDeg ?? 60}°: drawn at the rim of the wheel` });
-  const st = stats.summary();
-  const fs = formStats.summary();
+  const rings: RingSummary[] = tracks.map((t) => {
+    const of = several ? ` of ${t.setup.tag}` : '';
+    if (t.planarFrames > 0) warnings.push({ code: 'ring-nearly-planar', message: `${t.planarFrames} frames have a nearly planar ring${of} (shape planar, no θ or φ)` });
+    if (t.plots.clamped > 0) warnings.push({ code: 'amplitude-beyond-wheel', message: `${t.plots.clamped} frames have τm${of} beyond ${options.maxAmplitudeDeg ?? 60}°: drawn at the rim of the wheel` });
+    const st = t.stats.summary();
+    const fs = t.formStats.summary();
+    const r = t.setup;
+    return {
+      tag: r.tag,
+      label: r.label,
+      residue: r.residue,
+      atoms: Array.from(r.ring, (a) => a + 1),
+      size: r.ring.length,
+      locants: r.locants,
+      referenceRule: r.referenceRule,
+      occupancy: st.occupancy,
+      counts: st.counts,
+      transitions: st.transitions,
+      dwell: st.dwell,
+      forms: { occupancy: fs.occupancy, transitions: fs.transitions, dwell: fs.dwell },
+    };
+  });
+  const one = rings[0]!;
   const summary: Omit<TrajectorySummary, 'files'> = {
     schema: 'conformark/trajectory@1',
     source: { path, format: source.binary ?? first.source.format, topology: options.topology ?? null },
-    ring: { atoms: Array.from(ring, (a) => a + 1), size: n, locants: setup.locants, referenceRule: setup.referenceRule },
+    ring: { atoms: one.atoms, size: one.size, locants: one.locants, referenceRule: one.referenceRule },
     frames: { read, analysed, first: firstAnalysed, last: lastAnalysed, from, to: Number.isFinite(to) ? to : null, stride },
     timestep,
     startTime: timestep ? start : null,
     box: optionBox ? 'option' : boxedFrames > 0 ? 'file' : null,
-    occupancy: st.occupancy,
-    counts: st.counts,
-    transitions: st.transitions,
-    dwell: st.dwell,
-    forms: { occupancy: fs.occupancy, transitions: fs.transitions, dwell: fs.dwell },
+    occupancy: one.occupancy,
+    counts: one.counts,
+    transitions: one.transitions,
+    dwell: one.dwell,
+    forms: one.forms,
+    rings,
     torsions: setup.torsionColumns,
     warnings,
   };
-  const files = await writeTrajectoryFiles(dir, summary, plots, setup, { formats: options.formats ?? ['svg'], theme: options.theme, timestep, dpi: options.dpi });
+  const figures = tracks.map((t, k) => ({ summary: { occupancy: { ...rings[k]!.occupancy }, frames: { analysed } }, plots: t.plots, setup: t.setup, suffix: several ? `-${t.setup.tag}` : '' }));
+  const files = await writeTrajectoryFiles(folder, summary, figures, { formats: options.formats ?? ['svg'], theme: options.theme, timestep, dpi: options.dpi, maxPixels: options.maxPixels });
   return { ...summary, files: ['puckering.csv', ...files] };
 }

@@ -6,7 +6,7 @@ import { usageError } from '../../model/errors.js';
 import type { Molecule } from '../../model/molecule.js';
 import { elementInfo } from '../../model/elements.js';
 import { BOND_TOLERANCE_A } from '../../perceive/perceiveBonds.js';
-import { boxFromLengths, type PeriodicBox } from '../../geometry/periodicBox.js';
+import { boxFromLengths, boxFromVectors, type PeriodicBox } from '../../geometry/periodicBox.js';
 
 /**
  * Parses `a b c` (rectangular) or `a b c α β γ` (Å, degrees; spaces or commas between).
@@ -25,8 +25,16 @@ export class FrameBoxes {
   private text = '';
   private box: PeriodicBox | null = null;
 
-  /** The box of a frame with these properties (PDB `CRYST1`), or null. */
+  /** The box of a frame with these properties (PDB `CRYST1`, GRO box line as `BOX_VECTORS`), or null. */
   of(properties: Readonly<Record<string, string>>): PeriodicBox | null {
+    const vectors = properties.BOX_VECTORS;
+    if (vectors !== undefined) {
+      if (vectors !== this.text) {
+        this.text = vectors;
+        this.box = boxFromVectors(vectors.split(' ').map(Number));
+      }
+      return this.box;
+    }
     const t = properties.CRYST1 ?? '';
     if (t !== this.text) {
       this.text = t;

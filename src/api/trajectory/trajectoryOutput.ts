@@ -1,8 +1,7 @@
-/** Writes `summary.json` and the three trajectory figures (each in every requested format). */
-import { join } from 'node:path';
+/** Writes `summary.json` and the three trajectory figures of each ring (each in every requested format). */
 import { jsonText } from '../jsonText.js';
-import { writeAtomic } from '../../io/writeAtomic.js';
-import { writeFigure, type FigureFormat } from '../figures/writeFigure.js';
+import type { OutputFolder } from '../../io/outputFolder.js';
+import { figureBytes, type FigureFormat } from '../figures/writeFigure.js';
 import { loadTheme, sceneMetrics } from '../../render/themes.js';
 import { renderSvg } from '../../render/renderSvg.js';
 import { measureText } from '../../render/svgWindow.js';
@@ -13,7 +12,7 @@ import { layoutPseudorotationWheel } from '../../layout/plots/pseudorotationWhee
 import { layoutTimeSeries, type SeriesSpec } from '../../layout/plots/timeSeriesLayout.js';
 import { layoutOccupancy } from '../../layout/plots/occupancyLayout.js';
 import type { Timestep } from './timestep.js';
-import type { TrajectorySetup } from './trajectorySetup.js';
+import type { RingSetup } from './trajectorySetup.js';
 import { PHI_THETA_MIN, type TrajectoryPlots } from './trajectoryPlots.js';
 import { SHAPE_ORDER, withTrajectoryRoles } from './trajectoryTheme.js';
 
@@ -24,6 +23,8 @@ export interface TrajectoryFigureOptions {
   readonly timestep: Timestep | null;
   /** PNG resolution, dots per inch. Default 300. */
   readonly dpi?: number;
+  /** Most pixels of one PNG. Default 64,000,000. */
+  readonly maxPixels?: number;
 }
 
 const angle = (label: string, max: number, step: number, wraps: boolean, extra: Partial<SeriesSpec> = {}): SeriesSpec => ({
@@ -46,7 +47,7 @@ export function seriesSpecs(size: number, plots: TrajectoryPlots): SeriesSpec[] 
 }
 
 /** The scenes of a run: map (six- and five-rings only), time series, occupancy. */
-export function trajectoryScenes(summary: { occupancy: Record<string, number>; frames: { analysed: number } }, plots: TrajectoryPlots, setup: TrajectorySetup, theme: Theme, timestep: Timestep | null): Map<string, Scene> {
+export function trajectoryScenes(summary: { occupancy: Record<string, number>; frames: { analysed: number } }, plots: TrajectoryPlots, setup: RingSetup, theme: Theme, timestep: Timestep | null): Map<string, Scene> {
   const metrics = sceneMetrics(theme);
   const common = { metrics, measure: measureText, ringLabel: setup.label };
   const scenes = new Map<string, Scene>();
@@ -58,26 +59,35 @@ export function trajectoryScenes(summary: { occupancy: Record<string, number>; f
   return scenes;
 }
 
-/** Writes summary.json and every figure; returns the paths written, relative to `dir`. */
-export async function writeTrajectoryFiles(
-  dir: string,
-  summary: { occupancy: Record<string, number>; frames: { analysed: number } },
-  plots: TrajectoryPlots,
-  setup: TrajectorySetup,
-  options: TrajectoryFigureOptions,
-): Promise<string[]> {
+/** What the figures of one ring need. */
+export interface RingFigures {
+  readonly summary: { occupancy: Record<string, number>; frames: { analysed: number } };
+  readonly plots: TrajectoryPlots;
+  readonly setup: RingSetup;
+  /** Added to the file names (`-CHX2`), '' for a single ring. */
+  readonly suffix: string;
+}
+
+/**
+ * Writes every ring's figures and then commits the folder with summary.json as its manifest (so the figures,
+ * the CSV and the summary appear together); returns the paths written, relative to the folder.
+ */
+export async function writeTrajectoryFiles(folder: OutputFolder, summary: object, rings: readonly RingFigures[], options: TrajectoryFigureOptions): Promise<string[]> {
   const files = ['summary.json'];
   const theme = withTrajectoryRoles(loadTheme(options.theme));
-  const figures: [string, string][] = [];
-  for (const [name, scene] of trajectoryScenes(summary, plots, setup, theme, options.timestep)) {
-    figures.push([name, renderSvg(scene, theme, { idPrefix: `${name}-` })]);
-  }
-  for (const [name, svg] of figures) {
-    for (const format of options.formats) {
-      await writeFigure(join(dir, `${name}.${format}`), svg, { format, dpi: options.dpi });
-      files.push(`${name}.${format}`);
+  for (const ring of rings) {
+    const figures: [string, string][] = [];
+    for (const [name, scene] of trajectoryScenes(ring.summary, ring.plots, ring.setup, theme, options.timestep)) {
+      const file = `${name}${ring.suffix}`;
+      figures.push([file, renderSvg(scene, theme, { idPrefix: `${file}-` })]);
+    }
+    for (const [name, svg] of figures) {
+      for (const format of options.formats) {
+        folder.write(`${name}.${format}`, await figureBytes(svg, format, { dpi: options.dpi, maxPixels: options.maxPixels }));
+        files.push(`${name}.${format}`);
+      }
     }
   }
-  writeAtomic(join(dir, 'summary.json'), jsonText({ ...summary, files: ['puckering.csv', ...files] }));
+  folder.commit(jsonText({ ...summary, files: ['puckering.csv', ...files] }));
   return files;
 }

@@ -52,7 +52,7 @@ export function registerBatch(program: Command): void {
     .option('--energy-field <name>', 'SD field or XYZ key holding the energy (default: the first whose name contains "energy")')
     .option('--energy-unit <unit>', 'unit of the energies: kcal/mol, kJ/mol, hartree, eV (default: from the value, the field name or the file\'s convention; never guessed)')
     .action(async (file: string, flags: BatchFlags, command: Command) => {
-      const { read, hold } = limitsOf(command);
+      const { read, hold, maxPixels } = limitsOf(command);
       protectInput(file);
       const formats = flags.formats === undefined ? undefined : wordList<FigureFormat>('--formats', flags.formats, [...FIGURE_FORMATS.keys()]);
       const tables = flags.tables === undefined ? undefined : flags.tables.trim() === 'none' ? [] : wordList<TableFormat>('--tables', flags.tables, [...TABLE_FORMATS.keys()]);
@@ -62,7 +62,7 @@ export function registerBatch(program: Command): void {
       const result = await batchFile(file, flags.dir, {
         bonds: flags.bonds, sp2Bonds: flags.sp2Bonds === true, formats, tables, jobs, theme: flags.theme, dpi: dpiOption(flags.dpi), idPrefix: flags.idPrefix, sheet: flags.sheet !== false,
         energy: { field: flags.energyField, unit: flags.energyUnit },
-        read, hold,
+        read, hold, maxPixels,
         onProgress: bar
           ? (done, total) => {
               if (!started) bar.start(total, done);

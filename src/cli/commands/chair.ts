@@ -17,7 +17,7 @@ import {
   type RingView,
   jsonText,
 } from '../../index.js';
-import { finiteNumber, limitsOf, oneOf, printWarnings, wholeNumber, DPI_HELP, dpiOption } from '../options.js';
+import { finiteNumber, limitsOf, ringScopeOf, oneOf, printWarnings, wholeNumber, DPI_HELP, dpiOption } from '../options.js';
 
 interface ChairFlags {
   ring?: string;
@@ -40,7 +40,7 @@ export function registerChair(program: Command): void {
     .command('chair')
     .description('draw a ring: the trade chair (template) for chairs, the true orthographic view (projected) for any ring')
     .argument('<file>', 'coordinate file (XYZ, SDF/molfile, PDB; .gz read transparently; - for standard input)')
-    .option('--ring <R>', 'ring number as inspect lists it, an ordered atom list such as 1-2-3-4-5-6 or O5-C1-C2-C3-C4-C5, or a residue such as A/NAG501/ (default: the first six-ring, else the first ring)')
+    .option('--ring <R>', 'ring number as inspect lists it, an ordered atom list such as 1-2-3-4-5-6 or O5-C1-C2-C3-C4-C5, or a residue such as A/NAG501/; several ring numbers such as 1,2 draw fused chairs (default: the first six-ring, with the chairs edge-fused to it, else the first ring)')
     .option('--record <n>', 'record (frame) to draw, counted from 1 (default 1)')
     .option('--view <mode>', 'template (trade chair; chairs only) or projected (true view of any ring) (default: template for chairs, else projected)')
     .option('--elevation <deg>', 'viewer elevation above the ring plane in degrees, -90 to 90, for the projected view (giving it picks that view) (default 20)')
@@ -53,14 +53,16 @@ export function registerChair(program: Command): void {
     .option('--dpi <n>', DPI_HELP)
     .option('-o, --output <file>', 'write to FILE (.svg, .png or .pdf; .json with --json) instead of standard output')
     .action(async (file: string, flags: ChairFlags, command: Command) => {
-      const { read } = limitsOf(command);
+      const { read, maxPixels } = limitsOf(command);
       if (flags.output) protectInput(file);
       const recordNumber = wholeNumber('--record', flags.record ?? '1');
-      const { molecule, graph, rings } = prepareRecord(await readRecord(file, recordNumber, read));
-      const ordered = flags.ring !== undefined && ringTokenKind(flags.ring) === 'atoms';
-      const ring = flags.ring === undefined ? undefined : ringNumberOrAtoms(ringSelection(molecule, graph, rings, flags.ring), rings, ordered);
+      const { molecule, graph, rings } = prepareRecord(await readRecord(file, recordNumber, read), ringScopeOf(command));
+      // `--ring 1,2`: fused chairs of those rings
+      const fused = flags.ring !== undefined && /^\s*\d+(\s*,\s*\d+)+\s*$/.test(flags.ring) ? flags.ring.split(',').map((n) => Number(n)) : undefined;
+      const ordered = flags.ring !== undefined && !fused && ringTokenKind(flags.ring) === 'atoms';
+      const ring = flags.ring === undefined || fused ? undefined : ringNumberOrAtoms(ringSelection(molecule, graph, rings, flags.ring), rings, ordered);
       const figure = chairFigure(molecule, {
-        graph, rings, ring, ordered,
+        graph, rings, ring, ordered, fused,
         view: flags.view === undefined ? undefined : oneOf<RingView>('--view', flags.view, ['template', 'projected'], 'template'),
         elevationDeg: flags.elevation === undefined ? undefined : finiteNumber('--elevation', flags.elevation, -90, 90),
         hydrogens: hydrogensFlag(flags.hydrogens),
@@ -71,13 +73,14 @@ export function registerChair(program: Command): void {
       });
       printWarnings(figure.warnings, `${file}: record ${recordNumber}`);
       if (flags.json) {
-        const report = { schema: 'conformark/chair@1', record: recordNumber, ring: toReportRing(figure.ring), placement: toPlacementJson(figure.placement) };
+        const fusedRings = figure.rings ? { rings: figure.rings.map(toReportRing) } : {};
+        const report = { schema: 'conformark/chair@1', record: recordNumber, ring: toReportRing(figure.ring), ...fusedRings, placement: toPlacementJson(figure.placement) };
         const text = jsonText(report);
         if (flags.output) writeAtomic(flags.output, text);
         else process.stdout.write(text);
         return;
       }
-      if (flags.output) await writeFigure(flags.output, figure.svg, { dpi: dpiOption(flags.dpi) });
+      if (flags.output) await writeFigure(flags.output, figure.svg, { dpi: dpiOption(flags.dpi), maxPixels });
       else process.stdout.write(`${figure.svg}\n`);
     });
 }

@@ -8,6 +8,7 @@ import { registerBatch } from './batch.js';
 import { registerEnsemble } from './ensemble.js';
 import { registerTrajectory } from './trajectory.js';
 import { registerDemo } from './demo.js';
+import { registerExplore } from './explore.js';
 
 export type RegisterCommand = (program: Command) => void;
 
@@ -19,5 +20,6 @@ export const COMMANDS = new Map<string, RegisterCommand>([
   ['batch', registerBatch],
   ['ensemble', registerEnsemble],
   ['trajectory', registerTrajectory],
+  ['explore', registerExplore],
   ['demo', registerDemo],
 ]);

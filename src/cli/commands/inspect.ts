@@ -1,7 +1,7 @@
 /** `conformark inspect FILE`: per-record summary of rings, shapes, positions and torsions; `--json` report. */
 import type { Command } from 'commander';
-import { COUPLING_METHODS, inspectFile, inspectText, jsonText, protectInput, writeAtomic, type CouplingMethod } from '../../index.js';
-import { finiteNumber, limitsOf, oneOf, printWarnings } from '../options.js';
+import { COUPLING_METHODS, formatIssue, inspectFile, inspectText, jsonText, protectInput, safeText, writeAtomic, type CouplingMethod } from '../../index.js';
+import { finiteNumber, limitsOf, ringScopeOf, oneOf, printWarnings } from '../options.js';
 
 /** Warnings printed on stderr before the rest are only counted (a trajectory can raise thousands). */
 const MAX_WARNINGS = 20;
@@ -40,6 +40,7 @@ export function registerInspect(program: Command): void {
         toleranceA: flags.tolerance === undefined ? undefined : finiteNumber('--tolerance', flags.tolerance, 0, 2),
         read,
         hold,
+        ringScope: ringScopeOf(command),
       });
       if (flags.json) {
         const all = report.records.flatMap((r) => r.warnings.map((w) => ({ ...w, message: `record ${r.index}: ${w.message}` })));
@@ -51,5 +52,8 @@ export function registerInspect(program: Command): void {
       const text = flags.json ? jsonText(report) : inspectText(report);
       if (flags.output) writeAtomic(flags.output, text);
       else process.stdout.write(text);
+      // bad records were read past: each is one line on stderr, and the run ends with exit 1
+      for (const e of report.errors) process.stderr.write(`conformark: ${safeText(formatIssue(e), 1000).text}\n`);
+      if (report.errors.length > 0) process.exitCode = 1;
     });
 }

@@ -25,7 +25,7 @@ import {
   type NewmanLabels,
   jsonText,
 } from '../../index.js';
-import { limitsOf, oneOf, printWarnings, wholeNumber, DPI_HELP, dpiOption } from '../options.js';
+import { limitsOf, ringScopeOf, oneOf, printWarnings, wholeNumber, DPI_HELP, dpiOption } from '../options.js';
 
 interface NewmanFlags {
   bond: string[];
@@ -79,8 +79,8 @@ export function registerNewman(program: Command): void {
     .option('-d, --dir <dir>', 'with several bonds: write DIR/newman-A-B.svg for each')
     .action(async (file: string, flags: NewmanFlags, command: Command) => {
       if (flags.output || flags.dir) protectInput(file);
-      const { read } = limitsOf(command);
-      const { molecule: mol, graph, rings } = prepareRecord(await readRecord(file, wholeNumber('--record', flags.record ?? '1'), read));
+      const { read, maxPixels } = limitsOf(command);
+      const { molecule: mol, graph, rings } = prepareRecord(await readRecord(file, wholeNumber('--record', flags.record ?? '1'), read), ringScopeOf(command));
       const bonds = flags.bond.flatMap((text) => bondListSelection(mol, graph, text));
       const several = bonds.length > 1;
       if (several && (flags.up !== undefined || flags.mark !== undefined)) {
@@ -121,8 +121,8 @@ export function registerNewman(program: Command): void {
           idPrefix: several ? `${flags.idPrefix ?? 'newman-'}${front + 1}-${back + 1}-` : flags.idPrefix,
         });
         printWarnings(warnings, several ? `bond ${front + 1}-${back + 1}` : '');
-        if (several) await writeFigure(figurePath(flags, [front, back]), svg, { dpi: dpiOption(flags.dpi) });
-        else if (flags.output) await writeFigure(flags.output, svg, { dpi: dpiOption(flags.dpi) });
+        if (several) await writeFigure(figurePath(flags, [front, back]), svg, { dpi: dpiOption(flags.dpi), maxPixels });
+        else if (flags.output) await writeFigure(flags.output, svg, { dpi: dpiOption(flags.dpi), maxPixels });
         else process.stdout.write(`${svg}\n`);
       }
       if (several) process.stderr.write(`conformark: wrote ${bonds.length} figures${flags.dir ? ` into ${flags.dir}` : ''}\n`);

@@ -47,23 +47,23 @@ export function registerTrajectory(program: Command): void {
   program
     .command('trajectory')
     .description('ring puckering over every frame of a trajectory: puckering.csv, summary.json and figures in a folder')
-    .argument('<file>', 'multi-frame XYZ, multi-MODEL PDB or multi-record SDF (.gz read transparently), or DCD with --topology')
-    .option('--ring <R>', 'ring number as inspect lists it, or an ordered atom list such as 1-2-3-4-5-6 (default 1)')
+    .argument('<file>', 'multi-frame XYZ, GRO, multi-MODEL PDB or multi-record SDF (.gz read transparently), or DCD, XTC or TRR with --topology')
+    .option('--ring <R>', 'ring number as inspect lists it, an ordered atom list such as 1-2-3-4-5-6, a residue\'s ring(s) A/PRO42/, or name:BGC,NAG for every ring of those residues, each reported separately (default 1)')
     .requiredOption('-d, --dir <dir>', 'output folder (created)')
     .option('--stride <n>', 'analyse every nth frame (default 1)')
     .option('--from <n>', 'first frame to analyse, counted from 1 (default 1)')
     .option('--to <n>', 'last frame to analyse (default: the last)')
     .option('--timestep <value...>', 'time between frames with a unit, e.g. "2 ps" or 2ps (fs, ps, ns, us, ms, s)')
     .option('--start-time <value...>', 'time of frame 1 with a unit, e.g. "10 ns" (default: from the file where it has it, else 0)')
-    .option('--topology <file>', 'atoms of a coordinate-only trajectory (DCD): a PDB of the same system, same atom order')
-    .option('--box <cell>', 'periodic box "a b c" or "a b c alpha beta gamma" (Å, degrees); default the file\'s cell (PDB CRYST1)')
+    .option('--topology <file>', 'atoms of a coordinate-only trajectory (DCD, XTC, TRR): a PDB or GRO of the same system, same atom order')
+    .option('--box <cell>', 'periodic box "a b c" or "a b c alpha beta gamma" (Å, degrees); default the file\'s cell (DCD/XTC/TRR box, GRO box line, PDB CRYST1)')
     .option('--torsion <A-B-C-D...>', 'torsions to add as CSV columns (numbers from 1 or atom names); repeatable')
     .option('--formats <list>', 'figure formats, comma-separated: svg, png, pdf (default svg)')
     .option('--dpi <n>', DPI_HELP)
     .option('--theme <name|path>', 'column (print), projector (slides), contrast (colour-blind-safe), or a theme .json file (default column)')
     .action(async (file: string, flags: TrajectoryFlags, command: Command) => {
       protectInput(file);
-      const { read } = limitsOf(command);
+      const { read, maxPixels } = limitsOf(command);
       const bar = progress();
       try {
         const summary = await analyzeTrajectory(file, {
@@ -81,12 +81,17 @@ export function registerTrajectory(program: Command): void {
           theme: flags.theme,
           dpi: dpiOption(flags.dpi),
           read,
+          maxPixels,
           onProgress: (read) => bar.update(read),
         });
         bar.stop();
         printWarnings(summary.warnings, file);
-        const top = Object.entries(summary.occupancy).sort((a, b) => b[1] - a[1]).map(([s, f]) => `${s} ${(f * 100).toFixed(1)}%`).join(', ');
-        process.stdout.write(`${summary.frames.analysed} frames analysed (${summary.ring.atoms.join('-')}): ${top}\n`);
+        const top = (occupancy: Record<string, number>) => Object.entries(occupancy).sort((a, b) => b[1] - a[1]).map(([s, f]) => `${s} ${(f * 100).toFixed(1)}%`).join(', ');
+        if (summary.rings.length === 1) process.stdout.write(`${summary.frames.analysed} frames analysed (${summary.ring.atoms.join('-')}): ${top(summary.occupancy)}\n`);
+        else {
+          process.stdout.write(`${summary.frames.analysed} frames analysed, ${summary.rings.length} rings:\n`);
+          for (const r of summary.rings) process.stdout.write(`  ${r.tag} (${r.atoms.join('-')}): ${top(r.occupancy)}\n`);
+        }
         process.stdout.write(`wrote ${summary.files.map((f) => `${flags.dir.replace(/\/$/, '')}/${f}`).join(', ')}\n`);
       } finally {
         bar.stop();

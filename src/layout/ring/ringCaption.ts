@@ -74,3 +74,26 @@ export function ringDescription(ring: RingAnalysis, view: RingView, elevationDeg
     .join('; ');
   return `${how} Ring ${ids(ring)}: ${ring.shape}${ring.descriptor ? ` ${ring.descriptor}` : ''}; ${numbers}${subs ? ` Substituents: ${subs}.` : ''}`;
 }
+
+/** A ring's name on a fused figure: its number as `inspect` lists it, else its atoms. */
+const fusedName = (ring: RingAnalysis) => (ring.id === undefined ? `ring ${ids(ring)}` : `ring ${ring.id}`);
+
+/** Caption of fused chairs: one line per ring, `ring 1: chair ⁴C₁  Q 0.565 Å  θ 2.1°`. */
+export function fusedCaption(rings: readonly RingAnalysis[]): CaptionRun[][] {
+  return rings.map((ring) => {
+    const [head, numbers] = ringCaption(ring);
+    return [{ text: `${fusedName(ring)}: `, level: 'base' }, ...head!, { text: '  ', level: 'base' }, ...numbers!];
+  });
+}
+
+/** The `<title>` of fused chairs. */
+export function fusedTitle(rings: readonly RingAnalysis[]): string {
+  return `Fused chair drawing of rings ${rings.map((r) => `${ids(r)} (${r.shape}${r.descriptor ? ` ${r.descriptor}` : ''})`).join(', ')}`;
+}
+
+/** The `<desc>` of fused chairs: how they are placed, then every ring as `ringDescription` says it. */
+export function fusedDescription(rings: readonly RingAnalysis[], element: (atom: number) => string): string {
+  const how = 'Stylised chair outlines sharing their fusion bonds, each placed from its measured Cremer–Pople displacements and substituent positions, all seen from the side of the first ring.';
+  const each = rings.map((r) => ringDescription(r, 'template', null, element).replace(/^Stylised chair outline[^.]*\. /, ''));
+  return `${how} ${each.join(' ')}`;
+}

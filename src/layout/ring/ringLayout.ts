@@ -11,7 +11,7 @@ import type { RingAnalysis } from '../../analysis/ringAnalysis.js';
 import { firstFree, grow, segmentCrossing, type Box, type Obstacles, type Segment } from '../text/labelPlacement.js';
 import { boxAt, textBox, type TextBox } from '../text/textBox.js';
 import { approximateMeasure, DEFAULT_METRICS, shiftItem, textStyle, type Scene, type SceneItem, type SceneLine, type SceneMetrics, type TextMeasure, type TextRun, type TextStyle } from '../scene.js';
-import { ringCaption, ringDescription, ringTitle, type CaptionRun } from './ringCaption.js';
+import { fusedCaption, fusedDescription, fusedTitle, ringCaption, ringDescription, ringTitle, type CaptionRun } from './ringCaption.js';
 import { ringAtomLabel, ringVertexLabel, substituentLabel, type RingLabels } from './ringLabels.js';
 import { isTerminalDouble, type GroupContext } from '../text/groupLabel.js';
 import { runsBox } from '../text/textBox.js';
@@ -70,8 +70,10 @@ export function layoutRing(placement: RingPlacement, ring: RingAnalysis, mol: Mo
   };
 
   // 1. Ring heteroatom symbols at their vertices; bonds stop short of them.
+  const rings = placement.rings ?? [ring];
+  const ringAtoms = [...new Set(rings.flatMap((r) => r.atoms))];
   const cut = new Map<number, number>();
-  for (const a of placement.ring) {
+  for (const a of ringAtoms) {
     const text = ringVertexLabel(mol, a);
     if (!text) continue;
     const t = textBox(text, labelStyle, measure);
@@ -119,7 +121,7 @@ export function layoutRing(placement: RingPlacement, ring: RingAnalysis, mol: Mo
     bondEnds.set(d.line.atoms![1]!, { x: d.line.x2, y: d.line.y2 });
     if (!bondEnds.has(d.line.atoms![0]!)) bondEnds.set(d.line.atoms![0]!, { x: d.line.x1, y: d.line.y1 });
   }
-  for (const a of placement.ring) bondEnds.set(a, at(a));
+  for (const a of ringAtoms) bondEnds.set(a, at(a));
   const maxGap = labelStyle.fontSize / 2;
   for (const b of placement.bonds) {
     if (b.role === 'ring-bond') continue;
@@ -138,21 +140,26 @@ export function layoutRing(placement: RingPlacement, ring: RingAnalysis, mol: Mo
     addText('atom-label', runsText(runs), box, t, labelStyle, atom, runs);
   }
 
-  // 4. Ring locants beside their vertices, outward first.
-  const ringPts = placement.ring.map(at);
-  const cx = ringPts.reduce((s, p) => s + p.x, 0) / ringPts.length;
-  const cy = ringPts.reduce((s, p) => s + p.y, 0) / ringPts.length;
-  placement.ring.forEach((a, j) => {
-    const text = ringAtomLabel(mol, ring, j, labels, options.names);
-    if (!text) return;
-    const t = textBox(text, locantStyle, measure);
-    const p = at(a);
-    const candidates = aroundCandidates(p.x, p.y, AZ(p.x - cx, p.y - cy), (cut.get(a) ?? 0) + metrics.gap, t, step);
-    // a locant reads as its vertex's only when it is nearer that vertex than any other bond end
-    const others = [...bondEnds].filter(([b]) => b !== a).map(([, pt]) => pt);
-    const picked = pickBondLabel(candidates, obstacles, clearance * 0.8, p, others, Infinity);
-    addText('ring-locant', text, picked.clean ? picked.box : candidates[firstFree(candidates, obstacles, clearance * 0.8)]!, t, locantStyle, a);
-  });
+  // 4. Ring locants beside their vertices, outward first (from the centre of the first ring that holds them).
+  const located = new Set<number>();
+  for (const r of rings) {
+    const ringPts = r.atoms.map(at);
+    const cx = ringPts.reduce((s, p) => s + p.x, 0) / ringPts.length;
+    const cy = ringPts.reduce((s, p) => s + p.y, 0) / ringPts.length;
+    r.atoms.forEach((a, j) => {
+      if (located.has(a)) return;
+      located.add(a);
+      const text = ringAtomLabel(mol, r, j, labels, options.names);
+      if (!text) return;
+      const t = textBox(text, locantStyle, measure);
+      const p = at(a);
+      const candidates = aroundCandidates(p.x, p.y, AZ(p.x - cx, p.y - cy), (cut.get(a) ?? 0) + metrics.gap, t, step);
+      // a locant reads as its vertex's only when it is nearer that vertex than any other bond end
+      const others = [...bondEnds].filter(([b]) => b !== a).map(([, pt]) => pt);
+      const picked = pickBondLabel(candidates, obstacles, clearance * 0.8, p, others, Infinity);
+      addText('ring-locant', text, picked.clean ? picked.box : candidates[firstFree(candidates, obstacles, clearance * 0.8)]!, t, locantStyle, a);
+    });
+  }
 
   // 5. Bounds, caption, shift into positive coordinates.
   let [x0, y0, x1, y1] = [Infinity, Infinity, -Infinity, -Infinity];
@@ -167,7 +174,7 @@ export function layoutRing(placement: RingPlacement, ring: RingAnalysis, mol: Mo
   }
   if (caption) {
     const capStyle = textStyle(metrics, 'caption');
-    const lines = ringCaption(ring);
+    const lines = placement.rings ? fusedCaption(placement.rings) : ringCaption(ring);
     const midX = (x0 + x1) / 2;
     let top = y1 + Math.max(metrics.gap * 2, capStyle.fontSize * 0.7);
     for (const runs of lines) {
@@ -185,8 +192,8 @@ export function layoutRing(placement: RingPlacement, ring: RingAnalysis, mol: Mo
     kind: placement.view === 'template' ? 'chair' : 'ring-projection',
     width: x1 - x0 + 2 * metrics.margin,
     height: y1 - y0 + 2 * metrics.margin,
-    title: ringTitle(ring, placement.view),
-    desc: ringDescription(ring, placement.view, placement.elevationDeg, element),
+    title: placement.rings ? fusedTitle(placement.rings) : ringTitle(ring, placement.view),
+    desc: placement.rings ? fusedDescription(placement.rings, element) : ringDescription(ring, placement.view, placement.elevationDeg, element),
     items: [...items, ...texts].map((it) => shiftItem(it, dx, dy)),
   };
 }

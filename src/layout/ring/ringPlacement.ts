@@ -6,6 +6,7 @@
 import type { ViewPoint } from './ringView.js';
 import type { ChairOutlineKind } from './chairOutline.js';
 import type { RingHydrogenMode } from './ringHydrogens.js';
+import type { RingAnalysis } from '../../analysis/ringAnalysis.js';
 
 /** The two ring views: the trade's chair template, or the true orthographic projection. */
 export type RingView = 'template' | 'projected';
@@ -37,6 +38,8 @@ export interface RingPlacement {
   readonly azimuthDeg?: number;
   /** Template outline of the family (`right-peak` or its mirror outline `right-valley`). */
   readonly outline?: ChairOutlineKind;
+  /** Fused chairs: every ring of the figure, `ring` first (`fusedChairTemplate`). Absent for one ring. */
+  readonly rings?: readonly RingAnalysis[];
 }
 
 /** Default elevation of both views, degrees (docs/methods.md#chair-drawing: 15–25° looks conventional). */
