@@ -1,6 +1,6 @@
 /**
  * Finds two atoms closer than a minimum distance: a sign of a broken or duplicated coordinate block.
- * Pairwise for small records (with a cheap x pre-test), a uniform grid for large ones, so it stays O(n).
+ * Pairwise for small records (with a cheap x pre-test), a uniform grid in typed arrays for large ones, so it stays O(n).
  */
 import type { Atom } from '../model/molecule.js';
 
@@ -27,38 +27,62 @@ function pairwise(c: Float64Array, n: number, d: number): [number, number] | nul
   return null;
 }
 
+/**
+ * Uniform grid in typed arrays: cells a hair wider than `d` (so rounding in the cell index can never separate a
+ * close pair), hashed into a power-of-two table of linked lists; buckets shared by distant cells only add checks.
+ * Atoms are added after their own check, so the answer is the smallest j with a close earlier atom, and its smallest i.
+ */
 function gridded(c: Float64Array, n: number, d: number): [number, number] | null {
   const d2 = d * d;
-  const cells = new Map<string, number[]>();
-  let best: [number, number] | null = null;
-  const key = (x: number, y: number, z: number): string => `${x},${y},${z}`;
+  const size = 1 / (d * (1 + 2 ** -20));
+  let mx = Infinity;
+  let my = Infinity;
+  let mz = Infinity;
+  for (let j = 0; j < n; j++) {
+    if (c[3 * j]! < mx) mx = c[3 * j]!;
+    if (c[3 * j + 1]! < my) my = c[3 * j + 1]!;
+    if (c[3 * j + 2]! < mz) mz = c[3 * j + 2]!;
+  }
+  let bits = 4;
+  while (1 << bits < 2 * n) bits++;
+  const mask = (1 << bits) - 1;
+  const head = new Int32Array(1 << bits).fill(-1);
+  const next = new Int32Array(n);
+  // cell index per axis, clamped (monotone, so neighbours stay neighbours) to keep the arithmetic in integers
+  const cell = (v: number, m: number): number => Math.min(MAX_CELL, Math.floor((v - m) * size));
+  const bucket = (x: number, y: number, z: number): number => (Math.imul(x, 73856093) ^ Math.imul(y, 19349663) ^ Math.imul(z, 83492791)) & mask;
   for (let j = 0; j < n; j++) {
     const x = c[3 * j]!;
     const y = c[3 * j + 1]!;
     const z = c[3 * j + 2]!;
-    const cx = Math.floor(x / d);
-    const cy = Math.floor(y / d);
-    const cz = Math.floor(z / d);
-    for (let ax = -1; ax <= 1; ax++) {
-      for (let ay = -1; ay <= 1; ay++) {
-        for (let az = -1; az <= 1; az++) {
-          for (const i of cells.get(key(cx + ax, cy + ay, cz + az)) ?? []) {
+    const cx = cell(x, mx);
+    const cy = cell(y, my);
+    const cz = cell(z, mz);
+    if (!(cx >= 0 && cy >= 0 && cz >= 0)) continue; // a non-finite coordinate is close to nothing
+    let best = -1;
+    for (let ax = cx - 1; ax <= cx + 1; ax++) {
+      for (let ay = cy - 1; ay <= cy + 1; ay++) {
+        for (let az = cz - 1; az <= cz + 1; az++) {
+          for (let i = head[bucket(ax, ay, az)]!; i !== -1; i = next[i]!) {
+            if (best !== -1 && i >= best) continue;
             const dx = c[3 * i]! - x;
             const dy = c[3 * i + 1]! - y;
             const dz = c[3 * i + 2]! - z;
-            if (dx * dx + dy * dy + dz * dz < d2 && (best === null || i < best[0])) best = [i, j];
+            if (dx * dx + dy * dy + dz * dz < d2) best = i;
           }
         }
       }
     }
-    if (best) return best;
-    const k = key(cx, cy, cz);
-    const list = cells.get(k);
-    if (list) list.push(j);
-    else cells.set(k, [j]);
+    if (best !== -1) return [best, j];
+    const b = bucket(cx, cy, cz);
+    next[j] = head[b]!;
+    head[b] = j;
   }
   return null;
 }
+
+/** Largest cell index per axis: beyond it cells merge into one (only more checks, never a missed pair). */
+const MAX_CELL = 2 ** 20;
 
 /** `atoms 3 (C) and 7 (H) are 0.12 Å apart, closer than 0.4 Å` (1-based numbers). */
 export function overlapMessage(atoms: readonly Atom[], c: Float64Array, i: number, j: number, min: number): string {

@@ -1,6 +1,6 @@
 /** SVG → vector PDF with pdfkit + svg-to-pdfkit, text in the embedded DejaVu Sans, fixed dates (reproducible). */
 import { usageError } from '../model/errors.js';
-import { FONT_FILE, FONT_FILE_BOLD } from './svgWindow.js';
+import { FONT_FILE, FONT_FILE_BOLD } from './fontFiles.js';
 
 /** Page size of an SVG from its root width/height (pt, px or unitless = px), in pt. */
 export function svgSizePt(svg: string): { width: number; height: number } {

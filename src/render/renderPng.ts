@@ -4,9 +4,14 @@
  * word processor places a 300 dpi figure at its print size.
  */
 import { crc32 } from 'node:zlib';
-import { Resvg } from '@resvg/resvg-js';
+import { createRequire } from 'node:module';
+import type { Resvg as ResvgClass } from '@resvg/resvg-js';
 import { usageError } from '../model/errors.js';
-import { FONT_FILE, FONT_FILE_BOLD } from './svgWindow.js';
+import { FONT_FILE, FONT_FILE_BOLD } from './fontFiles.js';
+
+// loaded on first use (a native addon): most runs write no PNG
+let Resvg: typeof ResvgClass | undefined;
+const loadResvg = (): typeof ResvgClass => (Resvg ??= (createRequire(import.meta.url)('@resvg/resvg-js') as { Resvg: typeof ResvgClass }).Resvg);
 
 /** Default PNG resolution, dots per inch (print). */
 export const DEFAULT_DPI = 300;
@@ -72,7 +77,7 @@ export function renderPng(svg: string, options: RenderPngOptions = {}): Uint8Arr
   const { background = '#ffffff', maxPixels = DEFAULT_MAX_PIXELS } = options;
   const scale = options.scale ?? (options.dpi ?? DEFAULT_DPI) / 96;
   if (!(Number.isFinite(scale) && scale > 0)) throw usageError('bad-option', `PNG resolution must be a positive number, got ${options.scale ?? options.dpi}`);
-  const resvg = new Resvg(svg, {
+  const resvg = new (loadResvg())(svg, {
     font: { loadSystemFonts: false, fontFiles: [FONT_FILE, FONT_FILE_BOLD], defaultFontFamily: 'DejaVu Sans', sansSerifFamily: 'DejaVu Sans' },
     fitTo: { mode: 'zoom', value: scale },
     background,

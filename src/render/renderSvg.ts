@@ -8,10 +8,9 @@
  * calls (canvas.line/path/circle/plain + attr, then svg() without `data-svgjs`), but building, cloning and
  * serialising svgdom nodes cost more than half of every figure (batch bench). The rules that svg.js applies
  * (number text, colour normalising, escaping, attribute order) live in svgMarkup.ts; a property test renders
- * random scenes both ways and compares bytes, and the goldens pin them. svg.js stays where a DOM is needed:
- * text measurement (svgWindow.ts).
+ * random scenes both ways and compares bytes, and the goldens pin them. svg.js on svgdom stays the test
+ * reference (svgDocument.ts).
  */
-import { PathArray } from '@svgdotjs/svg.js';
 import type { Scene, SceneItem } from '../layout/scene.js';
 import { usageError } from '../model/errors.js';
 import type { Primitive, RoleStyle, Theme } from './theme.js';
@@ -102,8 +101,8 @@ export function renderSvg(scene: Scene, theme: Theme | string = 'column', option
   return `${out}</svg>`;
 }
 
-/** svg.js draws an empty `d` as its own empty path array (`M0 0 `). */
-const EMPTY_PATH = new PathArray().toString();
+/** svg.js draws an empty `d` as its own empty path array, `M0 0 ` (test/render/renderSvgDirect.test.ts checks). */
+export const EMPTY_PATH = 'M0 0 ';
 
 function itemText(item: SceneItem, style: string, round: (x: number) => number): string {
   const role = escapeXml(item.role);

@@ -5,7 +5,7 @@
 import type { Scene, SceneItem } from '../../src/layout/scene.js';
 import type { Primitive, RoleStyle, Theme } from '../../src/render/theme.js';
 import { loadTheme } from '../../src/render/themes.js';
-import { sharedCanvas } from '../../src/render/svgWindow.js';
+import { sharedCanvas } from '../../src/render/svgDocument.js';
 import { MAX_LABEL_LENGTH, safeText } from '../../src/layout/text/safeText.js';
 
 const roundTo = (digits: number) => (x: number): number => {

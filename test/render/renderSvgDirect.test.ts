@@ -1,8 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import type { Scene, SceneItem } from '../../src/layout/scene.js';
-import { renderSvg } from '../../src/render/renderSvg.js';
-import { attrValue, escapeXml, svgNumber } from '../../src/render/svgMarkup.js';
+import { Color, PathArray } from '@svgdotjs/svg.js';
+import { EMPTY_PATH, renderSvg } from '../../src/render/renderSvg.js';
+import { attrValue, colourText, escapeXml, svgNumber } from '../../src/render/svgMarkup.js';
 import { parseTheme, type Theme } from '../../src/render/theme.js';
 import { loadTheme, THEMES } from '../../src/render/themes.js';
 import { svgjsRenderSvg } from '../helpers/svgjsRenderSvg.js';
@@ -67,5 +68,17 @@ describe('svgMarkup rules', () => {
     expect(attrValue('fill', '#AbC')).toBe('#aabbcc');
     expect(attrValue('stroke', 'currentColor')).toBe('currentColor');
     expect(attrValue('class', '#AbC')).toBe('#AbC');
+  });
+});
+
+describe('svgMarkup rules against svg.js itself', () => {
+  it('colourText writes what svg.js Color writes for hex and rgb() colours', () => {
+    const hex = fc.stringMatching(/^#([0-9a-fA-F]{3}|[0-9a-fA-F]{6})$/);
+    const rgb = fc.tuple(fc.nat(400), fc.nat(400), fc.nat(400), fc.constantFrom('', ' ')).map(([r, g, b, s]) => `rgb(${r},${s}${g},${b}${s})`);
+    fc.assert(fc.property(fc.oneof(hex, rgb), (value) => colourText(value) === new Color(value).toString()), { seed: 22, numRuns: 500 });
+  });
+
+  it('EMPTY_PATH is the text of an empty svg.js PathArray', () => {
+    expect(EMPTY_PATH).toBe(new PathArray().toString());
   });
 });

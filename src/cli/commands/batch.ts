@@ -1,6 +1,6 @@
 /** `conformark batch FILE -d DIR`: every figure of every record, contact sheets, SI tables and manifest.json. */
 import type { Command } from 'commander';
-import cliProgress from 'cli-progress';
+import { cliProgress } from '../progressBar.js';
 import {
   BOND_SETS,
   FIGURE_FORMATS,
@@ -63,7 +63,7 @@ export function registerBatch(program: Command): void {
       const formats = flags.formats === undefined ? undefined : wordList<FigureFormat>('--formats', flags.formats, [...FIGURE_FORMATS.keys()]);
       const tables = flags.tables === undefined ? undefined : flags.tables.trim() === 'none' ? [] : wordList<TableFormat>('--tables', flags.tables, [...TABLE_FORMATS.keys()]);
       const jobs = flags.jobs === undefined ? undefined : wholeNumber('--jobs', flags.jobs);
-      const bar = process.stderr.isTTY ? new cliProgress.SingleBar({ format: 'figures {bar} {value}/{total}', stream: process.stderr }, cliProgress.Presets.shades_classic) : null;
+      const bar = process.stderr.isTTY ? new (cliProgress().SingleBar)({ format: 'figures {bar} {value}/{total}', stream: process.stderr }, cliProgress().Presets.shades_classic) : null;
       let started = false;
       const result = await batchFile(file, flags.dir, {
         bonds: flags.bonds, sp2Bonds: flags.sp2Bonds === true, formats, tables, jobs, theme: flags.theme, dpi: dpiOption(flags.dpi), idPrefix: flags.idPrefix, sheet: flags.sheet !== false,

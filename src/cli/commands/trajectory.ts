@@ -1,6 +1,6 @@
 /** `conformark trajectory FILE --ring R -d DIR`: ring puckering over every frame, tables and figures. */
 import type { Command } from 'commander';
-import cliProgress from 'cli-progress';
+import { cliProgress } from '../progressBar.js';
 import { analyzeTrajectory, FIGURE_FORMATS, parseTimestep, protectInput, usageError, type FigureFormat } from '../../index.js';
 import { limitsOf, oneOf, printWarnings, wholeNumber, DPI_HELP, dpiOption } from '../options.js';
 
@@ -33,9 +33,9 @@ function formats(text: string | undefined): FigureFormat[] {
 function progress(): { update: (framesRead: number) => void; stop: () => void } {
   if (!process.stderr.isTTY) return { update: () => {}, stop: () => {} };
   const start = Date.now();
-  const bar = new cliProgress.SingleBar(
+  const bar = new (cliProgress().SingleBar)(
     { format: 'conformark: {value} frames read | {fps} frames/s', stream: process.stderr, hideCursor: true, fps: 5 },
-    cliProgress.Presets.shades_classic,
+    cliProgress().Presets.shades_classic,
   );
   bar.start(0, 0, { fps: 0 });
   return {
