@@ -81,9 +81,24 @@ export interface TrajectoryOptions extends RingShapeOptions {
   readonly onProgress?: (framesRead: number, framesAnalysed: number) => void;
 }
 
-/** What `analyzeTrajectory` returns (the content of `summary.json` plus the files written). */
+/** Occupancy, transitions and dwell of one ring, by shape and by form. */
+export interface RingStatistics {
+  readonly occupancy: Readonly<Record<string, number>>;
+  readonly counts: Readonly<Record<string, number>>;
+  readonly transitions: Readonly<Record<string, Readonly<Record<string, number>>>>;
+  readonly dwell: Readonly<Record<string, DwellStats>>;
+  /** The same statistics by ring form (descriptor, or the shape word where there is none): a chair flip shows here. */
+  readonly forms: {
+    readonly occupancy: Readonly<Record<string, number>>;
+    readonly transitions: Readonly<Record<string, Readonly<Record<string, number>>>>;
+    readonly dwell: Readonly<Record<string, DwellStats>>;
+  };
+  readonly assignment: Assignment;
+  readonly inversions: Inversions | null;
+}
+
 /** The statistics of one followed ring. */
-export interface RingSummary {
+export interface RingSummary extends RingStatistics {
   /** `CHX2`, `A_PRO42`, `ring1`: the prefix of its CSV columns and figure names when several rings are followed. */
   readonly tag: string;
   readonly label: string;
@@ -92,17 +107,6 @@ export interface RingSummary {
   readonly size: number;
   readonly locants: readonly string[];
   readonly referenceRule: string;
-  readonly occupancy: Readonly<Record<string, number>>;
-  readonly counts: Readonly<Record<string, number>>;
-  readonly transitions: Readonly<Record<string, Readonly<Record<string, number>>>>;
-  readonly dwell: Readonly<Record<string, DwellStats>>;
-  readonly forms: {
-    readonly occupancy: Readonly<Record<string, number>>;
-    readonly transitions: Readonly<Record<string, Readonly<Record<string, number>>>>;
-    readonly dwell: Readonly<Record<string, DwellStats>>;
-  };
-  readonly assignment: Assignment;
-  readonly inversions: Inversions | null;
 }
 
 /** How frames were assigned to states for `transitions` and `dwell`. */
@@ -122,7 +126,8 @@ export interface Inversions {
   readonly perNs: number | null;
 }
 
-export interface TrajectorySummary {
+/** What `analyzeTrajectory` returns (the content of `summary.json` plus the files written); the statistics are the first ring's. */
+export interface TrajectorySummary extends RingStatistics {
   readonly schema: 'conformark/trajectory@1';
   readonly source: { readonly path: string; readonly format: FormatName | BinaryFormat | null; readonly topology: string | null };
   readonly ring: { readonly atoms: readonly number[]; readonly size: number; readonly locants: readonly string[]; readonly referenceRule: string };
@@ -132,18 +137,6 @@ export interface TrajectorySummary {
   readonly startTime: number | null;
   /** Where the periodic box came from: `option` (`--box`), `file` (at least one frame's own cell) or null. */
   readonly box: 'option' | 'file' | null;
-  readonly occupancy: Readonly<Record<string, number>>;
-  readonly counts: Readonly<Record<string, number>>;
-  readonly transitions: Readonly<Record<string, Readonly<Record<string, number>>>>;
-  readonly dwell: Readonly<Record<string, DwellStats>>;
-  /** The same statistics by ring form (descriptor, or the shape word where there is none): a chair flip shows here. */
-  readonly forms: {
-    readonly occupancy: Readonly<Record<string, number>>;
-    readonly transitions: Readonly<Record<string, Readonly<Record<string, number>>>>;
-    readonly dwell: Readonly<Record<string, DwellStats>>;
-  };
-  readonly assignment: Assignment;
-  readonly inversions: Inversions | null;
   /** Every followed ring (the top-level `ring`, `occupancy` … `inversions` repeat the first). */
   readonly rings: readonly RingSummary[];
   readonly torsions: readonly string[];
