@@ -4,8 +4,9 @@ import { ConformarkError, usageError, type Warning } from '../../model/errors.js
 import { buildGraph, type Graph } from '../../perceive/graph.js';
 import { withBonds } from '../../perceive/withBonds.js';
 import { findRings } from '../../perceive/findRings.js';
-import { analyzeRing, type AnalyzeRingOptions, type RingAnalysis } from '../../analysis/ringAnalysis.js';
-import { chemicalNumbering, chemicalRingOrder } from '../../analysis/chemicalNumbering.js';
+import type { AnalyzeRingOptions, RingAnalysis } from '../../analysis/ringAnalysis.js';
+import { chemicalNumbering } from '../../analysis/chemicalNumbering.js';
+import { analyzeDrawnRing } from './drawnRingForms.js';
 import { legibilityWarnings } from './legibilityWarnings.js';
 import { chairTemplate } from '../../layout/ring/chairTemplate.js';
 import { fusedChairTemplate, fusedSystem } from '../../layout/ring/fusedChairTemplate.js';
@@ -82,15 +83,9 @@ export function chairFigure(mol: Molecule, options: ChairFigureOptions = {}): Ch
   // chemical numbering (carbohydrate convention, lowest locants) names the drawn atoms; a ring that is not a
   // sugar ring is analysed in that numbering too, so the caption's descriptor uses the locants on the drawing
   const numbering = chemicalNumbering(mol, graph, rings);
-  const analyse = (ringAtoms: readonly number[], ringId: number | undefined): RingAnalysis => {
-    const chemical = options.ordered || options.labels === 'id' || options.labels === 'name' ? null : chemicalRingOrder(numbering, graph, ringAtoms);
-    return analyzeRing(mol, graph, chemical?.atoms ?? ringAtoms, {
-      ...options.analysis,
-      ...(ringId === undefined ? {} : { id: ringId }),
-      ordered: options.ordered ?? chemical !== null,
-      ...(chemical ? { locants: chemical.locants, numberingRule: chemical.rule } : {}),
-    });
-  };
+  const chemical = !(options.ordered || options.labels === 'id' || options.labels === 'name');
+  const analyse = (ringAtoms: readonly number[], ringId: number | undefined): RingAnalysis =>
+    analyzeDrawnRing(mol, graph, numbering, ringAtoms, { chemical, ordered: options.ordered, id: ringId, analysis: options.analysis });
   const ring = analyse(atoms, id);
   // 2. View and placement.
   const view = options.view ?? (ring.shape === 'chair' && ring.size === 6 && options.elevationDeg === undefined ? 'template' : 'projected');
