@@ -45,6 +45,8 @@ export class GroConsumer implements LineConsumer {
   private atoms = 0;
   private width = 0;
   private count = 0;
+  /** Atom lines of the current frame read so far (a failed frame still skips all of its lines). */
+  private seen = 0;
   private failed = false;
   private stopped = false;
 
@@ -77,13 +79,14 @@ export class GroConsumer implements LineConsumer {
         this.builder = new RecordBuilder(this.file, 'gro', this.limits);
         this.builder.reserve(n);
         this.width = 0;
+        this.seen = 0;
         this.failed = false;
         this.expect = 'atoms';
         return;
       }
       case 'atoms':
         this.atom(line, lineNo);
-        if (this.builder!.atomCount === this.atoms || this.failed) this.expect = 'box';
+        if (++this.seen === this.atoms) this.expect = 'box';
         return;
       case 'box':
         this.box(line, lineNo);
@@ -93,7 +96,7 @@ export class GroConsumer implements LineConsumer {
   end(lastLine: number): void {
     if (this.stopped) return;
     if (this.expect === 'title' && this.count === 0) this.emit(failure(issue('no-atoms', this.file, lastLine || 1, 'no GRO frame (title, atom count, atom lines, box line)'), true));
-    else if (this.expect !== 'title') {
+    else if (this.expect !== 'title' && !this.failed) {
       const what = this.expect === 'box' ? 'its box line' : this.expect === 'count' ? 'its atom count' : `atom ${this.builder!.atomCount + 1} of ${this.atoms}`;
       this.emit(failure(issue('truncated-frame', this.file, lastLine, `frame ${this.count} (title at line ${this.titleLine}) ends before ${what}`), true));
     }

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { parseText } from '../../src/io/parseText.js';
+import { parseText, parseTextSettled } from '../../src/io/parseText.js';
 import { groElement } from '../../src/io/gro.js';
 import { ParseError } from '../../src/model/errors.js';
 
@@ -24,6 +24,23 @@ function issueOf(fn: () => unknown): string {
 }
 
 describe('GRO reader', () => {
+  it('parseTextSettled(GRO with one bad atom line in frame 2) fails that frame alone, with one issue, and reads the frames after it', () => {
+    const lines = text.split('\n');
+    const per = Number(lines[1]) + 3;
+    const at = per + 2 + 4; // atom 5 of frame 2
+    lines[at] = `${lines[at]!.slice(0, 20)}   x.xxx${lines[at]!.slice(28)}`;
+    const settled = parseTextSettled(lines.join('\n'), { file: 'bad.gro' });
+    expect(settled.map((s) => s.ok)).toEqual([true, false, true, true, true]);
+    const bad = settled[1]!;
+    expect(bad.ok ? [] : bad.error.issues.map((i) => `${i.line}: ${i.message}`)).toEqual([`${at + 1}: x coordinate 'x.xxx' is not a number`]);
+  });
+
+  it('parseTextSettled(GRO cut inside an atom line) gives one issue for the cut frame, not a second about its box line', () => {
+    const cut = text.slice(0, text.indexOf('\n', 2900) - 12); // ends inside an atom line's coordinates
+    const issues = parseTextSettled(cut, { file: 'cut.gro' }).flatMap((s) => (s.ok ? [] : s.error.issues.map((i) => i.code)));
+    expect(issues).toHaveLength(1);
+  });
+
   it('parseText(multi-frame GRO) gives the coordinates mdtraj reads (Å), atom names, elements, residues and serials', () => {
     const frames = parseText(text, { file: 'rings.gro' });
     expect(frames.length).toBe(ref.gro.length);
