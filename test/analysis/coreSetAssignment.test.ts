@@ -1,3 +1,8 @@
+/**
+ * Core-set assignment of trajectory frames (Buchete & Hummer 2008, J. Phys. Chem. B 112, 6057): a frame inside a
+ * form's core commits the ring to it, a frame outside every core keeps the last committed form. The 10° core radius
+ * is common practice, no source; the expected sequences below are derived by hand from that rule.
+ */
 import { describe, expect, it } from 'vitest';
 import { CoreSetAssignment } from '../../src/analysis/coreSetAssignment.js';
 

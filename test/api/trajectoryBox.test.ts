@@ -1,3 +1,8 @@
+/**
+ * Rings split across a periodic box are made whole by the minimum image along their bonds (common practice, no
+ * source); the reference is the same frames left whole, analysed the same way (derived: wrapping moves atoms by
+ * whole cell vectors only, so the puckering must not change).
+ */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';

@@ -1,3 +1,8 @@
+/**
+ * Transitions and inversions of a built chair-flip walk with flicker: the core-set rule (Buchete & Hummer 2008,
+ * J. Phys. Chem. B 112, 6057) must count the planned inversions exactly; the expected counts are derived from the
+ * walk's construction.
+ */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';

@@ -1,3 +1,7 @@
+/**
+ * Which rings are analysed (docs/methods.md#rings): metal contacts close no ring, disulfide loops between residues
+ * and rings over 12 atoms are set aside. The rules are common practice, no source.
+ */
 import { describe, expect, it } from 'vitest';
 import { DEFAULT_MAX_RING_SIZE, isCoordinationBond, ringClosingBonds, scopeRings } from '../../src/perceive/ringScope.js';
 import type { Atom, Molecule } from '../../src/model/molecule.js';
