@@ -17,7 +17,14 @@ import { failure, issue, quote, type Emit, type LineConsumer } from './sink.js';
 const ONE_LETTER = new Set(['H', 'C', 'N', 'O', 'S', 'P', 'F', 'I']);
 
 /**
- * The element of a GRO atom: an ion whose atom name is its residue name (`NA` in `NA`, `CL` in `CL`, `MG`),
+ * Three-letter ion names that several MD force fields give both residue and atom (SOD for sodium, CLA for
+ * chloride …): read by the first letters they would be sulfur, carbon or phosphorus. Common practice, no source.
+ */
+const ION_NAMES: Readonly<Record<string, string>> = { SOD: 'Na', POT: 'K', CLA: 'Cl', CAL: 'Ca', CES: 'Cs', LIT: 'Li', RUB: 'Rb', BAR: 'Ba' };
+
+/**
+ * The element of a GRO atom: an ion whose atom name is its residue name (`NA` in `NA`, `CL` in `CL`, `MG`,
+ * `SOD` in `SOD`),
  * else the first letter when it is H, C, N, O, S, P, F or I (`CA`, `HW1`, `OW`, `1HB`), else the first two letters
  * (`Br`, `Zn`). Common practice, no source. Null when neither names an element.
  * @example groElement('CA', 'ALA') // 'C'
@@ -31,6 +38,7 @@ export function groElement(name: string, residue: string): string | null {
     const ion = elementInfo(letters)?.symbol;
     if (ion) return ion;
   }
+  if (letters === res && ION_NAMES[letters]) return ION_NAMES[letters]!;
   if (ONE_LETTER.has(letters[0]!)) return letters[0]!;
   return elementInfo(letters.slice(0, 2))?.symbol ?? elementInfo(letters[0]!)?.symbol ?? null;
 }

@@ -93,5 +93,8 @@ describe('GRO reader', () => {
     expect(groElement('CA', 'CA')).toBe('Ca');
     expect(groElement('ZN', 'ZN2')).toBe('Zn');
     expect(groElement('BR', 'LIG')).toBe('Br');
+    // three-letter ion names would otherwise read as sulfur, phosphorus and carbon
+    expect(['SOD', 'POT', 'CLA', 'CAL'].map((n) => groElement(n, n))).toEqual(['Na', 'K', 'Cl', 'Ca']);
+    expect(groElement('SD', 'MET')).toBe('S');
   });
 });
